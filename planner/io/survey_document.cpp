@@ -1,5 +1,12 @@
 #include "planner/io/survey_document.hpp"
 
+#include <set>
+
+#include "planner/io/json_fields.hpp"
+#include "planner/io/survey_checks.hpp"
+#include "planner/io/survey_reader.hpp"
+#include "planner/io/survey_writer.hpp"
+
 namespace mendwright::io {
 
 std::string Diagnostic::to_string() const { return path.empty() ? message : path + ": " + message; }
@@ -24,13 +31,128 @@ std::vector<Diagnostic> SurveyLoad::warnings() const {
     return result;
 }
 
-// Placeholder until the reader lands (same day): refuses every document.
-SurveyLoad read_survey(std::string_view) {
+namespace {
+
+// Parses the text, recording each key that appears twice in one object (JSON parsers keep
+// only one of the two values, which would silently drop the other).
+std::optional<Json> parse_json(std::string_view text, Diagnostics& d) {
+    struct Frame {
+        bool is_array = false;
+        std::size_t index = 0;
+        std::set<std::string> keys;
+        std::string key;
+        std::string path;
+    };
+    std::vector<Frame> stack;
+    const auto child_path = [&]() -> std::string {
+        if (stack.empty()) return "";
+        const Frame& top = stack.back();
+        return top.is_array ? index_path(top.path, top.index) : field_path(top.path, top.key);
+    };
+    const auto value_done = [&] {
+        if (!stack.empty() && stack.back().is_array) ++stack.back().index;
+    };
+    const Json::parser_callback_t callback = [&](int, Json::parse_event_t event, Json& parsed) {
+        switch (event) {
+            case Json::parse_event_t::object_start:
+            case Json::parse_event_t::array_start: {
+                Frame frame;
+                frame.is_array = event == Json::parse_event_t::array_start;
+                frame.path = child_path();
+                stack.push_back(std::move(frame));
+                break;
+            }
+            case Json::parse_event_t::key: {
+                Frame& top = stack.back();
+                top.key = parsed.get<std::string>();
+                if (!top.keys.insert(top.key).second)
+                    d.error(field_path(top.path, top.key), "appears twice in the same object; expected each field once");
+                break;
+            }
+            case Json::parse_event_t::object_end:
+            case Json::parse_event_t::array_end:
+                if (!stack.empty()) stack.pop_back();
+                value_done();
+                break;
+            case Json::parse_event_t::value:
+                value_done();
+                break;
+        }
+        return true;
+    };
+    try {
+        return Json::parse(text.begin(), text.end(), callback, true, false);
+    } catch (const Json::parse_error& e) {
+        // what(): "[json.exception.parse_error.101] parse error at line 3, column 5: ..."
+        std::string message = e.what();
+        if (const auto at = message.find("parse error"); at != std::string::npos) message = message.substr(at);
+        d.items.clear();
+        d.error("", "not valid JSON: " + message);
+    } catch (const std::exception& e) {
+        d.items.clear();
+        d.error("", std::string("not valid JSON: ") + e.what());
+    }
+    return std::nullopt;
+}
+
+// The format and version gate: anything else in a document of another format or a newer
+// version may mean something different, so nothing more is read.
+bool check_format_and_version(const Json& root, Diagnostics& d) {
+    if (!root.is_object()) {
+        d.error("", "expected a JSON object with \"format\": \"" + std::string(survey_format_name) + "\", got " + shown(root));
+        return false;
+    }
+    const auto format = root.find("format");
+    if (format == root.end()) {
+        d.error("format", "missing; expected \"" + std::string(survey_format_name) + "\"");
+        return false;
+    }
+    if (!format->is_string() || format->get<std::string>() != survey_format_name) {
+        d.error("format", "expected \"" + std::string(survey_format_name) + "\", got " + shown(*format) +
+                              "; this is not a Mendwright survey document");
+        return false;
+    }
+    const auto version = root.find("version");
+    if (version == root.end()) {
+        d.error("version", "missing; expected a whole number (this program reads version " +
+                               std::to_string(survey_format_version) + ")");
+        return false;
+    }
+    if (!version->is_number_integer() || version->get<long long>() < 1) {
+        d.error("version", "expected a whole number >= 1, got " + shown(*version));
+        return false;
+    }
+    if (version->get<long long>() > survey_format_version) {
+        d.error("version", "this document is version " + std::to_string(version->get<long long>()) +
+                               " of the survey format; this program reads version " +
+                               std::to_string(survey_format_version) +
+                               " and older. Open it with a newer Mendwright; it has not been changed");
+        return false;
+    }
+    return true;
+}
+
+}  // namespace
+
+SurveyLoad read_survey(std::string_view json_text) {
     SurveyLoad load;
-    load.diagnostics.push_back({Severity::error, "", "survey reading is not implemented yet"});
+    Diagnostics d;
+    try {
+        const std::optional<Json> root = parse_json(json_text, d);
+        if (root && check_format_and_version(*root, d)) {
+            model::Installation installation = read_installation(*root, d);
+            check_installation(installation, d);
+            if (!d.has_errors()) load.installation = std::move(installation);
+        }
+    } catch (const std::exception& e) {  // keeps the promise never to throw (e.g. out of memory)
+        d.error("", std::string("could not read the document: ") + e.what());
+    }
+    load.diagnostics = std::move(d.items);
     return load;
 }
 
-std::string write_survey(const model::Installation&) { return "{}\n"; }
+std::string write_survey(const model::Installation& installation) {
+    return installation_json(installation).dump(2, ' ', false, Json::error_handler_t::replace) + "\n";
+}
 
 }  // namespace mendwright::io
