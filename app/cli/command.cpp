@@ -58,7 +58,9 @@ Result<double> ParsedArgs::number(const std::string& flag, bool must_be_positive
     auto raw = text(flag);
     if (!raw) return problem("--" + flag, "is required");
     auto value = parse_double(*raw);
-    if (!value || !std::isfinite(*value)) return problem("--" + flag, "expected a number, got " + quoted(*raw));
+    if (!value || !std::isfinite(*value))
+        return problem("--" + flag, std::string(must_be_positive ? "expected a number > 0" : "expected a number") +
+                                        ", got " + quoted(*raw));
     if (must_be_positive && *value <= 0.0) return problem("--" + flag, "expected a number > 0, got " + quoted(*raw));
     return *value;
 }
