@@ -86,6 +86,7 @@ std::string AssessContext::circuit_text(const model::Circuit& circuit) {
 }
 
 std::string AssessContext::device_text(const model::Device& device) {
+    if (!device.label.empty()) return device.label;  // as marked on the board: "RCD 100 mA (whole board)"
     std::string kind;
     switch (device.kind) {
         case model::DeviceKind::main_switch: kind = "main switch"; break;
@@ -95,7 +96,7 @@ std::string AssessContext::device_text(const model::Device& device) {
         case model::DeviceKind::fuse: kind = "fuse"; break;
         case model::DeviceKind::switch_fuse: kind = "switch-fuse"; break;
     }
-    return kind + " " + (device.label.empty() ? device.id : device.label);
+    return kind + " " + device.id;
 }
 
 double AssessContext::required_disconnection_time_s(const CircuitEntry& entry) const {

@@ -47,10 +47,11 @@ std::optional<Finding> without_rcd(const AssessContext& context, const CircuitEn
     if (circuit.r1_plus_r2_ohms) finding.inputs.push_back(number_input("R1+R2", *circuit.r1_plus_r2_ohms, "Ω"));
 
     const std::string lead = "No RCD above this circuit in a TT system. ";
-    const std::string need = " (" + device_rating_text(device) + ") must open within " + number_text(time_s) +
-                             " s (Table 41.1, TT)";
+    const std::string within = " within " + number_text(time_s) + " s (Table 41.1, TT)";
+    const std::string device_words = device_rating_text(device);
     if (!loop) {
-        finding.explanation = lead + "Neither Zs nor RA is recorded, so the fault current cannot be computed; the" + need +
+        finding.explanation = lead + "Neither Zs nor RA is recorded, so the fault current cannot be computed; the " +
+                              device_words + " must open" + within +
                               ", which with the earth electrode in the loop an overcurrent device almost never does.";
         return finding;
     }
@@ -60,9 +61,9 @@ std::optional<Finding> without_rcd(const AssessContext& context, const CircuitEn
     const std::string current_text = "If = U0 " + number_text(u0_volts) + " V / (" + loop->expression + ") = " +
                                      number_text(fault_current_amps) + " A";
     if (!has_breaker_curve(device)) {
-        finding.explanation = lead + current_text + "; the" + need +
-                              ", and its operating current at that time is not held in the profile: an overcurrent "
-                              "device cannot be shown to disconnect at a few amperes.";
+        finding.explanation = lead + current_text + "; the " + device_words + " must open" + within +
+                              ", and the current that opens it in that time is not held in the profile: it cannot be "
+                              "shown to disconnect at a few amperes.";
         return finding;
     }
     // BS EN 60898-1: Ia = upper instantaneous multiple x In opens the breaker within 0.1 s,
@@ -70,17 +71,17 @@ std::optional<Finding> without_rcd(const AssessContext& context, const CircuitEn
     const double multiple = calc::instantaneous_trip_band(calc_curve(*device.curve)).upper_multiple;
     const double ia_amps = multiple * device.rating_amps;
     finding.inputs.push_back(number_input("Ia", ia_amps, "A"));
+    const std::string ia_text = "Ia " + number_text(ia_amps) + " A (" + number_text(multiple) + " × " +
+                                number_text(device.rating_amps) + " A)";
     if (fault_current_amps >= ia_amps && !loop->partial) return std::nullopt;
     if (fault_current_amps >= ia_amps) {
         // RA alone already lets enough current flow: the circuit's own R1+R2 can only lower it,
         // so this cannot be called a pass; ask for the measurement.
-        finding.explanation = lead + current_text + " ≥ Ia " + number_text(ia_amps) + " A (" + number_text(multiple) +
-                              " × " + number_text(device.rating_amps) + " A) counting RA only; R1+R2 and Zs are not "
-                              "recorded, so disconnection is not confirmed.";
+        finding.explanation = lead + current_text + " ≥ " + ia_text + " counting RA only; R1+R2 and Zs are not "
+                              "recorded, so disconnection of the " + device_words + within + " is not confirmed.";
         return finding;
     }
-    finding.explanation = lead + current_text + " < Ia " + number_text(ia_amps) + " A (" + number_text(multiple) + " × " +
-                          number_text(device.rating_amps) + " A), the current that opens the" + need + ".";
+    finding.explanation = lead + current_text + " < " + ia_text + ", the current that opens the " + device_words + within + ".";
     return finding;
 }
 

@@ -50,8 +50,8 @@ std::optional<Finding> check_tn(const AssessContext& context, const CircuitEntry
                       number_input("Zs maximum (Table 41.3)", max_ohms, "Ω"),
                       number_input("factor for measured Zs", limits.measured_zs_factor, "", 2),
                       number_input("Cmin", limits.cmin, "", 2), number_input("U0", u0_volts, "V")};
-    finding.explanation = "Zs " + number_text(zs_ohms) + " Ω > " + number_text(limits.measured_zs_factor) + " × " +
-                          number_text(max_ohms) + " Ω = " + number_text(limit_ohms) + " Ω (" + device_rating_text(device) +
+    finding.explanation = "Zs " + number_text(zs_ohms, 3) + " Ω > " + number_text(limits.measured_zs_factor) + " × " +
+                          number_text(max_ohms) + " Ω = " + number_text(limit_ohms, 3) + " Ω (" + device_rating_text(device) +
                           ": Cmin " + number_text(limits.cmin) + " × U0 " + number_text(u0_volts) + " V / (" +
                           number_text(multiple) + " × " + number_text(device.rating_amps) + " A) = " + number_text(max_ohms) +
                           " Ω, Table 41.3)." + rcd_words;
@@ -69,9 +69,9 @@ std::optional<Finding> check_tt(const AssessContext& context, const CircuitEntry
     Finding finding = context.new_finding(rule_id, "over_rcd_maximum", "circuit:" + circuit.id, entry.board, &circuit, rcd->device);
     finding.title = "Measured Zs above the maximum for the RCD";
     finding.inputs = {number_input("Zs measured", zs_ohms, "Ω"), number_input("IΔn", idn_amps, "A", 3),
-                      number_input("Zs maximum (Table 41.5)", *max_ohms, "Ω", 0)};
-    finding.explanation = "Zs " + number_text(zs_ohms) + " Ω > " + number_text(limit_volts) + " V / IΔn " +
-                          number_text(idn_amps, 3) + " A = " + number_text(*max_ohms, 0) + " Ω (Table 41.5, " +
+                      number_input("Zs maximum (Table 41.5)", *max_ohms, "Ω", 1)};
+    finding.explanation = "Zs " + number_text(zs_ohms, 3) + " Ω > " + number_text(limit_volts) + " V / IΔn " +
+                          number_text(idn_amps, 3) + " A = " + number_text(*max_ohms, 1) + " Ω (Table 41.5, " +
                           AssessContext::device_text(*rcd->device) + ").";
     return finding;
 }

@@ -2,6 +2,7 @@
 // Looking findings up in tests.
 
 #include <algorithm>
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -9,9 +10,11 @@
 
 namespace mendwright::test {
 
-inline const rules::Finding* finding_with_id(const std::vector<rules::Finding>& findings, const std::string& id) {
+// A copy, so that it may be called on a temporary list of findings.
+inline std::optional<rules::Finding> finding_with_id(const std::vector<rules::Finding>& findings, const std::string& id) {
     const auto found = std::find_if(findings.begin(), findings.end(), [&](const rules::Finding& f) { return f.id == id; });
-    return found == findings.end() ? nullptr : &*found;
+    if (found == findings.end()) return std::nullopt;
+    return *found;
 }
 
 inline std::vector<rules::Finding> findings_of_rule(const std::vector<rules::Finding>& findings, const std::string& rule) {

@@ -23,7 +23,7 @@ TEST_CASE("rules tt.fault_protection: RA 600 ohm under a 100 mA RCD gives 60 V, 
     installation.boards.push_back(board("cu", {rcd("rcd1", 0.1)},
                                         {circuit("c1", model::CircuitUse::cooker, breaker("cb1", model::BreakerCurve::b, 32), "rcd1")}));
     const auto findings = assess_default(installation);
-    const auto* finding = finding_with_id(findings, "tt.fault_protection@circuit:c1");
+    auto finding = finding_with_id(findings, "tt.fault_protection@circuit:c1");
     REQUIRE(finding);
     CHECK(finding->code == rules::Code::c2);
     CHECK(finding->device_id == "rcd1");
@@ -51,7 +51,7 @@ TEST_CASE("rules tt.fault_protection: no RCD, RA 45 ohm, B32 breaker cannot disc
     c1.r1_plus_r2_ohms = 0.62;
     installation.boards.push_back(board("cu", {main_switch("ms")}, {c1}));
     const auto findings = assess_default(installation);
-    const auto* finding = finding_with_id(findings, "tt.fault_protection@circuit:c1");
+    auto finding = finding_with_id(findings, "tt.fault_protection@circuit:c1");
     REQUIRE(finding);
     CHECK(finding->code == rules::Code::c2);
     CHECK(finding->explanation.find("If = U0 230 V / (RA 45 Ω + R1+R2 0.62 Ω) = 5.04 A < Ia 160 A") != std::string::npos);
@@ -64,11 +64,11 @@ TEST_CASE("rules tt.fault_protection: no RCD but a loop low enough that the B32 
     auto c1 = circuit("c1", model::CircuitUse::sockets, breaker("cb1", model::BreakerCurve::b, 32));
     c1.measured_zs_ohms = 1.4375;
     meets.boards.push_back(board("cu", {}, {c1}));
-    CHECK(finding_with_id(assess_default(meets), "tt.fault_protection@circuit:c1") == nullptr);
+    CHECK(finding_with_id(assess_default(meets), "tt.fault_protection@circuit:c1") == std::nullopt);
 
     auto fails = meets;
     fails.boards[0].circuits[0].measured_zs_ohms = 1.44;
-    CHECK(finding_with_id(assess_default(fails), "tt.fault_protection@circuit:c1") != nullptr);
+    CHECK(finding_with_id(assess_default(fails), "tt.fault_protection@circuit:c1") != std::nullopt);
 }
 
 TEST_CASE("rules tt.fault_protection: a fuse alone in TT cannot be shown to disconnect", "[rules][tt]") {
@@ -79,7 +79,7 @@ TEST_CASE("rules tt.fault_protection: a fuse alone in TT cannot be shown to disc
     fuse.fuse_standard = "BS 3036";
     fuse.rating_amps = 30.0;
     installation.boards.push_back(board("fb", {}, {circuit("c1", model::CircuitUse::sockets, fuse)}));
-    const auto* finding = finding_with_id(assess_default(installation), "tt.fault_protection@circuit:c1");
+    auto finding = finding_with_id(assess_default(installation), "tt.fault_protection@circuit:c1");
     REQUIRE(finding);
     CHECK(finding->code == rules::Code::c2);
 }
@@ -117,5 +117,5 @@ TEST_CASE("rules tt.fault_protection: the touch-voltage limit comes from the pro
     auto installation = tt_dwelling(310.0);
     installation.boards.push_back(board("cu", {rcd("rcd1", 0.1)},
                                         {circuit("c1", model::CircuitUse::cooker, breaker("cb1", model::BreakerCurve::b, 32), "rcd1")}));
-    CHECK(finding_with_id(rules::assess(installation, profile), "tt.fault_protection@circuit:c1") != nullptr);
+    CHECK(finding_with_id(rules::assess(installation, profile), "tt.fault_protection@circuit:c1") != std::nullopt);
 }
