@@ -1,0 +1,41 @@
+#pragma once
+// Small edits on a copy of the installation, shared by the apply functions of several kinds.
+// Each looks things up by id and does nothing when the thing is not there (a verification view
+// may leave a board out).
+
+#include <string>
+#include <vector>
+
+#include "planner/model/installation.hpp"
+#include "planner/model/navigation.hpp"
+
+namespace mendwright::remedies::edits {
+
+model::Board* board(model::Installation& installation, const std::string& board_id);
+model::Device* device(model::Installation& installation, const std::string& device_id);
+
+// An id not yet used by any board, device or circuit: `wanted`, else `wanted-2`, `wanted-3`...
+std::string unused_id(const model::Installation& installation, const std::string& wanted);
+
+// Final circuits of a board with no RCD or RCBO anywhere above them.
+int circuits_without_rcd(const model::Installation& installation, const model::Board& board);
+// Final circuits below a board (its own and those of boards it feeds).
+int final_circuits_in_and_below(const model::Installation& installation, const std::string& board_id);
+
+// Every final circuit with its chain of devices (as model::devices_above, nearest first), walked
+// once with a map of which circuit feeds each board (model::feeding_circuit scans every circuit
+// on each call, which is quadratic over a large installation).
+struct CircuitChain {
+    model::CircuitRef circuit;
+    std::vector<model::DeviceRef> devices;
+};
+std::vector<CircuitChain> final_circuit_chains(const model::Installation& installation);
+
+// A new RCD or RCBO device (type A, fitted by the remedial work).
+model::Device new_residual_device(const std::string& id, model::DeviceKind kind, double rating_amps,
+                                  double residual_amps, model::RcdDelay delay);
+
+// Forget test results that belonged to devices now removed (trip times), keep the cable's.
+void forget_device_tests(model::Circuit& circuit);
+
+}  // namespace mendwright::remedies::edits
