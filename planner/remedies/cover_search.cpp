@@ -37,8 +37,9 @@ public:
             });
     }
 
-    void run(const std::vector<std::set<std::size_t>>& forbidden) {
+    void run(const std::vector<std::set<std::size_t>>& forbidden, std::size_t real_options) {
         forbidden_ = &forbidden;
+        real_options_ = real_options;
         uncovered_ = covered_.size();
         search(0);
     }
@@ -88,7 +89,8 @@ private:
 
     bool is_forbidden() const {
         std::set<std::size_t> mine;
-        for (std::size_t o : chosen_) mine.insert(ids_[o]);
+        for (std::size_t o : chosen_)
+            if (ids_[o] < real_options_) mine.insert(ids_[o]);  // "leave open" choices do not count
         for (const auto& f : *forbidden_)
             if (f == mine) return true;
         return false;
@@ -151,12 +153,50 @@ private:
     std::vector<std::size_t> chosen_;
     std::size_t uncovered_ = 0;
     const std::vector<std::set<std::size_t>>* forbidden_ = nullptr;
+    std::size_t real_options_ = 0;
 };
+
+}  // namespace
+
+namespace {
+
+// Leaving a finding open costs more than any real plan (whose costs stay below 10^13 pence plus
+// the ideal plan's penalties of 10^11 each).
+constexpr std::int64_t leave_open_penalty = 100'000'000'000'000LL;
+
+CoverResult cover_with_all(const std::vector<CoverOption>& options, const std::vector<std::string>& required,
+                           const std::vector<std::set<std::size_t>>& forbidden, std::size_t real_options);
 
 }  // namespace
 
 CoverResult least_cost_cover(const std::vector<CoverOption>& options, const std::vector<std::string>& required,
                              const std::vector<std::set<std::size_t>>& forbidden) {
+    // One "leave it open" choice per coverable finding, after the real options.
+    std::set<std::string> coverable;
+    for (const auto& option : options) coverable.insert(option.clears.begin(), option.clears.end());
+    std::vector<CoverOption> extended = options;
+    for (const auto& id : required)
+        if (coverable.count(id)) extended.push_back({"(left open) " + id, leave_open_penalty, {id}, {}});
+    CoverResult result = cover_with_all(extended, required, forbidden, options.size());
+    std::vector<std::size_t> real;
+    for (std::size_t i : result.chosen) {
+        if (i < options.size()) {
+            real.push_back(i);
+        } else {
+            result.left_open.push_back(extended[i].clears.front());
+            result.cost -= leave_open_penalty;
+        }
+    }
+    result.chosen = std::move(real);
+    std::sort(result.left_open.begin(), result.left_open.end());
+    result.found = result.found && result.left_open.empty();
+    return result;
+}
+
+namespace {
+
+CoverResult cover_with_all(const std::vector<CoverOption>& options, const std::vector<std::string>& required,
+                           const std::vector<std::set<std::size_t>>& forbidden, std::size_t real_options) {
     CoverResult result;
     std::unordered_map<std::string, std::size_t> element_of;
     for (const auto& id : required) element_of.emplace(id, element_of.size());
@@ -234,7 +274,7 @@ CoverResult least_cost_cover(const std::vector<CoverOption>& options, const std:
             if (inside) local_forbidden.push_back(f);
         }
         PartSearch part(options, ids, local_element.size(), clears, slots, local_slot.size());
-        part.run(local_forbidden);
+        part.run(local_forbidden, real_options);
         result.nodes += part.nodes;
         if (!part.found) {
             result.found = false;
@@ -246,5 +286,7 @@ CoverResult least_cost_cover(const std::vector<CoverOption>& options, const std:
     std::sort(result.chosen.begin(), result.chosen.end());
     return result;
 }
+
+}  // namespace
 
 }  // namespace mendwright::remedies

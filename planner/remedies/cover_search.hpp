@@ -8,6 +8,8 @@
 //   - bound: each uncovered finding must be paid for at least by the cheapest share
 //     cost / (uncovered findings it clears) among the usable options clearing it.
 // Costs are integers (pence, or pence plus a penalty); ties go to fewer options, then ids.
+// Where exclusions make it impossible to clear every finding, each finding may be left open at a
+// penalty larger than any plan's cost, so the plan leaves as few open as it can.
 
 #include <cstdint>
 #include <set>
@@ -24,10 +26,13 @@ struct CoverOption {
 };
 
 struct CoverResult {
-    bool found = false;                  // every required finding can be cleared
+    bool found = false;                  // every coverable required finding is cleared (left_open empty)
     std::vector<std::size_t> chosen;     // indices into the options, ascending
     std::int64_t cost = 0;
     std::vector<std::string> uncoverable;  // required findings no option clears (left out)
+    // Required findings some option clears, but no allowed combination clears together with the
+    // rest (options that exclude each other): the plan clears as many as it can, then costs least.
+    std::vector<std::string> left_open;
     long long nodes = 0;                 // search nodes visited
 };
 

@@ -2,6 +2,7 @@
 
 #include "planner/model/navigation.hpp"
 
+#include <algorithm>
 #include <unordered_map>
 
 namespace mendwright::remedies::edits {
@@ -118,6 +119,31 @@ model::Device new_residual_device(const std::string& id, model::DeviceKind kind,
     device.delay = delay;
     device.installed_new = true;
     return device;
+}
+
+void insert_rcd_at_meter(model::Installation& installation, const UpstreamRcd& spec) {
+    if (!board(installation, spec.origin_board_id)) return;
+    model::Board enclosure;
+    enclosure.id = unused_id(installation, "upstream-rcd-enclosure");
+    enclosure.name = "RCD enclosure";
+    enclosure.location = "beside the meter";
+    enclosure.enclosure = model::EnclosureMaterial::non_combustible_other;
+    model::Circuit feed;
+    feed.id = unused_id(installation, "upstream-rcd-feed");
+    feed.number = "1";
+    feed.description = "Supply to the board (the former tails run)";
+    feed.use = model::CircuitUse::submain;
+    feed.feeds_board_id = spec.origin_board_id;
+    feed.device = new_residual_device(unused_id(installation, "upstream-rcd"), model::DeviceKind::rcd,
+                                      std::max(installation.supply.supply_fuse_rating_amps, 63.0), spec.residual_amps,
+                                      spec.delay);
+    feed.line_csa_mm2 = installation.tails.csa_mm2;
+    feed.cpc_csa_mm2 = installation.tails.csa_mm2;
+    feed.length_m = installation.tails.length_m;
+    enclosure.circuits.push_back(feed);
+    installation.tails.length_m = spec.new_tails_length_m;
+    installation.tails.route = model::TailsRoute::surface;
+    installation.boards.insert(installation.boards.begin(), std::move(enclosure));
 }
 
 void forget_device_tests(model::Circuit& circuit) {

@@ -35,6 +35,17 @@ std::vector<CircuitChain> final_circuit_chains(const model::Installation& instal
 model::Device new_residual_device(const std::string& id, model::DeviceKind kind, double rating_amps,
                                   double residual_amps, model::RcdDelay delay);
 
+// An RCD in its own enclosure beside the meter, ahead of the origin board: a new origin "board"
+// holding the RCD on one circuit that feeds the old origin board; the old tails run becomes that
+// circuit's cable and the new tails are `new_tails_length_m` long, on the surface.
+struct UpstreamRcd {
+    std::string origin_board_id;
+    double residual_amps = 0.1;
+    model::RcdDelay delay = model::RcdDelay::time_delayed;
+    double new_tails_length_m = 1.0;
+};
+void insert_rcd_at_meter(model::Installation& installation, const UpstreamRcd& spec);
+
 // Forget test results that belonged to devices now removed (trip times), keep the cable's.
 void forget_device_tests(model::Circuit& circuit);
 

@@ -146,7 +146,8 @@ Plan searched_plan(Verifier& verifier, const std::vector<Option>& options, const
         Plan plan = verified_plan(verifier, name, chosen, settings);
         for (const auto& id : result.uncoverable)
             plan.notes.push_back("no option clears " + id);
-        if (!result.found) plan.notes.push_back("no combination of options clears every finding the search aimed at");
+        for (const auto& id : result.left_open)
+            plan.notes.push_back("left open: options that clear " + id + " exclude others the plan needs");
         plan.notes.push_back("exact search: " + std::to_string(result.nodes) + " nodes");
         // Only urgent findings the search counted on and the combination left open send it back.
         std::set<std::string> residual(plan.figures.residual_ids.begin(), plan.figures.residual_ids.end());
@@ -158,7 +159,7 @@ Plan searched_plan(Verifier& verifier, const std::vector<Option>& options, const
             if (urgent.count(id) && residual.count(id) &&
                 std::find(result.uncoverable.begin(), result.uncoverable.end(), id) == result.uncoverable.end())
                 missed.push_back(id);
-        if (round > 0 && (!result.found || result.chosen.empty())) {
+        if (round > 0 && result.chosen.empty()) {
             // Nothing else to try: the best combination found, with what it leaves open.
             last.notes.push_back("no other combination of options clears them");
             return last;
@@ -200,7 +201,7 @@ Plan ideal_plan(Verifier& verifier, const std::vector<Option>& options, const Re
         if (f.code != rules::Code::note) required.push_back(f.id);
     // An option the catalogue marks as the cheaper variant costs a penalty larger than any real
     // plan, so it is used only where no other option clears a finding.
-    constexpr std::int64_t avoid_penalty = 1'000'000'000'000LL;
+    constexpr std::int64_t avoid_penalty = 100'000'000'000LL;
     std::vector<CoverOption> cover;
     std::vector<std::size_t> cover_to_option;
     for (std::size_t i = 0; i < options.size(); ++i) {

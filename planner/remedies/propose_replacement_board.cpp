@@ -2,8 +2,9 @@
 // circuits shared between them by split_between_two_rcds. "board-rcbo": a metal board with one
 // RCBO per final circuit. Both are new work (Board::new_work), so the rules for new work apply
 // to the changed copy; both carry a surge protective device; on a TT supply with no RCD above
-// the board, the board's incoming device is a 100 mA time-delayed RCD, so that the part between
-// the origin and the first 30 mA device has fault protection and stays selective.
+// the board (the origin board), a 100 mA time-delayed RCD in its own enclosure at the meter comes
+// with it, so that the tails and the part ahead of the first 30 mA device have fault protection
+// and stay selective.
 #include <algorithm>
 
 #include "planner/model/navigation.hpp"
@@ -51,14 +52,10 @@ void replace_board(model::Installation& installation, const BoardSpec& spec) {
     board = edits::board(installation, spec.board_id);
 
     model::Device incomer;
-    if (spec.time_delayed_incomer) {
-        incomer = edits::new_residual_device(incomer_id, model::DeviceKind::rcd, 100.0, 0.1, model::RcdDelay::time_delayed);
-    } else {
-        incomer.id = incomer_id;
-        incomer.kind = model::DeviceKind::main_switch;
-        incomer.rating_amps = 100.0;
-        incomer.installed_new = true;
-    }
+    incomer.id = incomer_id;
+    incomer.kind = model::DeviceKind::main_switch;
+    incomer.rating_amps = 100.0;
+    incomer.installed_new = true;
     incomer.label = "Main switch";
     board->devices.clear();
     board->devices.push_back(incomer);
@@ -103,6 +100,9 @@ void replace_board(model::Installation& installation, const BoardSpec& spec) {
     const int finals = static_cast<int>(std::count_if(board->circuits.begin(), board->circuits.end(),
                                                       [](const model::Circuit& c) { return !c.feeds_board_id; }));
     board->spare_ways = std::max(0, spec.ways - finals);
+    // TT at the origin: the time-delayed 100 mA RCD goes in its own enclosure at the meter, so the
+    // tails, the main switch and the busbar ahead of the 30 mA devices all have fault protection.
+    if (spec.time_delayed_incomer) edits::insert_rcd_at_meter(installation, {spec.board_id, 0.1, model::RcdDelay::time_delayed, 1.0});
 }
 
 }  // namespace
@@ -182,11 +182,18 @@ std::vector<Option> propose_replacement_boards(const ProposalContext& context) {
             if (tt && !is_origin && !rcd_above)
                 option.leaves_open.push_back("The cable feeding this board and its incoming side have no RCD above them on "
                                              "this TT supply: that is for the board above to give.");
-            if (spec.time_delayed_incomer)
-                option.bill.push_back({"RCD-S100-ENCL", 1.0, "time-delayed 100 mA RCD as the incoming device (TT)"});
+            if (spec.time_delayed_incomer) {
+                option.bill.push_back({"RCD-S100-ENCL", 1.0, "time-delayed 100 mA RCD at the meter, ahead of the board (TT)"});
+                option.bill.push_back({"TAILS-25-M", 1.0, "new tails, meter to RCD enclosure"});
+                option.assumptions.push_back("On this TT supply a time-delayed 100 mA RCD in its own enclosure beside the meter "
+                                             "protects the tails and the board ahead of its 30 mA devices; the old tails run "
+                                             "becomes the cable from it to the board.");
+                option.whole_installation = true;
+            }
             option.targets = std::move(targets);
             option.slots = {"board:" + board.id};
             if (is_origin) option.slots.push_back("origin");
+            if (spec.time_delayed_incomer) option.slots.push_back("tails");
             option.touched_boards = {board.id};
             option.apply = [spec](model::Installation& copy) { replace_board(copy, spec); };
             options.push_back(std::move(option));

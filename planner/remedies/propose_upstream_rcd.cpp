@@ -11,42 +11,6 @@
 
 namespace mendwright::remedies {
 
-namespace {
-
-struct UpstreamRcd {
-    std::string origin_board_id;
-    double residual_amps = 0.1;
-    model::RcdDelay delay = model::RcdDelay::time_delayed;
-    double new_tails_length_m = 1.0;
-};
-
-void insert_upstream_rcd(model::Installation& installation, const UpstreamRcd& spec) {
-    if (!edits::board(installation, spec.origin_board_id)) return;
-    model::Board enclosure;
-    enclosure.id = edits::unused_id(installation, "upstream-rcd-enclosure");
-    enclosure.name = "RCD enclosure";
-    enclosure.location = "beside the meter";
-    enclosure.enclosure = model::EnclosureMaterial::non_combustible_other;
-    model::Circuit feed;
-    feed.id = edits::unused_id(installation, "upstream-rcd-feed");
-    feed.number = "1";
-    feed.description = "Supply to the board (the former tails run)";
-    feed.use = model::CircuitUse::submain;
-    feed.feeds_board_id = spec.origin_board_id;
-    feed.device = edits::new_residual_device(edits::unused_id(installation, "upstream-rcd"), model::DeviceKind::rcd,
-                                             std::max(installation.supply.supply_fuse_rating_amps, 63.0),
-                                             spec.residual_amps, spec.delay);
-    feed.line_csa_mm2 = installation.tails.csa_mm2;
-    feed.cpc_csa_mm2 = installation.tails.csa_mm2;
-    feed.length_m = installation.tails.length_m;
-    enclosure.circuits.push_back(feed);
-    installation.tails.length_m = spec.new_tails_length_m;
-    installation.tails.route = model::TailsRoute::surface;
-    installation.boards.insert(installation.boards.begin(), std::move(enclosure));
-}
-
-}  // namespace
-
 std::vector<Option> propose_upstream_rcd(const ProposalContext& context) {
     std::vector<Option> options;
     const model::Board* origin = model::origin_board(context.installation);
@@ -56,7 +20,7 @@ std::vector<Option> propose_upstream_rcd(const ProposalContext& context) {
         if (!entry) continue;
         auto targets = detail::targets_for(*entry, context.findings, {});
         if (targets.empty()) continue;
-        UpstreamRcd spec;
+        edits::UpstreamRcd spec;
         spec.origin_board_id = origin->id;
         spec.residual_amps = entry->parameter("residual_current_amps", 0.1);
         spec.delay = entry->parameter("time_delayed", 1.0) > 0.5 ? model::RcdDelay::time_delayed : model::RcdDelay::general;
@@ -76,7 +40,7 @@ std::vector<Option> propose_upstream_rcd(const ProposalContext& context) {
         option.targets = std::move(targets);
         option.slots = {"origin", "tails"};
         option.whole_installation = true;
-        option.apply = [spec](model::Installation& installation) { insert_upstream_rcd(installation, spec); };
+        option.apply = [spec](model::Installation& installation) { edits::insert_rcd_at_meter(installation, spec); };
         options.push_back(std::move(option));
     }
     return options;

@@ -143,3 +143,18 @@ TEST_CASE("remedies plan search: equals brute force on 300 random option sets", 
         }
     }
 }
+
+TEST_CASE("remedies plan search: where exclusions forbid clearing everything, as many as possible are cleared",
+          "[remedies][plans]") {
+    // f1 only by "board" and f2 only by "upstream", which exclude each other (slot origin); f3 by
+    // either. Best: one of them, leaving one finding open; the cheaper (upstream) leaves f1 open.
+    const std::vector<CoverOption> options = {
+        {"board", 300, {"f1", "f3"}, {"origin"}},
+        {"upstream", 200, {"f2", "f3"}, {"origin"}},
+    };
+    const auto result = least_cost_cover(options, {"f1", "f2", "f3"});
+    CHECK_FALSE(result.found);
+    REQUIRE(result.left_open.size() == 1);
+    CHECK(result.cost == 200);
+    CHECK(result.left_open == std::vector<std::string>{"f1"});
+}
