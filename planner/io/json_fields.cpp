@@ -33,6 +33,14 @@ std::string shown(const Json& value) {
     return text;
 }
 
+std::optional<long long> whole_number_of(const Json& value) {
+    if (!value.is_number()) return std::nullopt;
+    const double number = value.get<double>();
+    // Beyond 1e15 a double no longer tells whole numbers apart reliably; no field needs such values.
+    if (!std::isfinite(number) || std::floor(number) != number || std::fabs(number) >= 1e15) return std::nullopt;
+    return static_cast<long long>(number);
+}
+
 std::string field_path(const std::string& parent, std::string_view key) {
     return parent.empty() ? std::string(key) : parent + "." + std::string(key);
 }
@@ -121,13 +129,7 @@ std::optional<long long> ObjectReader::whole_number(std::string_view key, Need n
         "expected a whole number from " + std::to_string(minimum) + " to " + std::to_string(maximum);
     const Json* value = field(key, need, expected);
     if (!value) return std::nullopt;
-    const bool whole = value->is_number_integer() ||
-                       (value->is_number_float() && std::isfinite(value->get<double>()) &&
-                        std::floor(value->get<double>()) == value->get<double>() && std::fabs(value->get<double>()) < 1e15);
-    if (whole) {
-        const auto number = static_cast<long long>(value->get<double>());
-        if (number >= minimum && number <= maximum) return number;
-    }
+    if (auto number = whole_number_of(*value); number && *number >= minimum && *number <= maximum) return number;
     diagnostics_.error(path_of(key), expected + ", got " + shown(*value));
     return std::nullopt;
 }

@@ -30,6 +30,9 @@ public:
 // A value as it appears in messages: "\"32A\"", "true", "null", "-3", "an object", "an array".
 std::string shown(const Json& value);
 
+// A JSON number that is a whole number (2 or 2.0, not 2.5), or nothing.
+std::optional<long long> whole_number_of(const Json& value);
+
 // "boards[0]" + "id" -> "boards[0].id"; "" + "job" -> "job".
 std::string field_path(const std::string& parent, std::string_view key);
 std::string index_path(const std::string& parent, std::size_t index);

@@ -118,12 +118,13 @@ bool check_format_and_version(const Json& root, Diagnostics& d) {
                                std::to_string(survey_format_version) + ")");
         return false;
     }
-    if (!version->is_number_integer() || version->get<long long>() < 1) {
+    const std::optional<long long> number = whole_number_of(*version);
+    if (!number || *number < 1) {
         d.error("version", "expected a whole number >= 1, got " + shown(*version));
         return false;
     }
-    if (version->get<long long>() > survey_format_version) {
-        d.error("version", "this document is version " + std::to_string(version->get<long long>()) +
+    if (*number > survey_format_version) {
+        d.error("version", "this document is version " + std::to_string(*number) +
                                " of the survey format; this program reads version " +
                                std::to_string(survey_format_version) +
                                " and older. Open it with a newer Mendwright; it has not been changed");

@@ -37,7 +37,7 @@ struct Diagnostic {
 
 struct SurveyLoad {
     std::optional<model::Installation> installation;  // set only when there are no errors
-    std::vector<Diagnostic> diagnostics;              // in document order, errors and warnings mixed
+    std::vector<Diagnostic> diagnostics;              // field by field in document order, then cross-field checks
 
     [[nodiscard]] bool ok() const;  // no errors (warnings allowed)
     [[nodiscard]] std::vector<Diagnostic> errors() const;

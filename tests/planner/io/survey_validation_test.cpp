@@ -137,6 +137,8 @@ const std::vector<MalformedCase>& malformed_cases() {
          "boards[0].spare_ways", {"expected a whole number from 0", "got -1"}},
         {"fractional rod count", [](Json& d) { d["electrode"]["count"] = 1.5; },
          "electrode.count", {"expected a whole number", "got 1.5"}},
+        {"whole number too large to be a count", [](Json& d) { d["electrode"]["count"] = 1e300; },
+         "electrode.count", {"expected a whole number", "got 1e+300"}},
         {"yes for a true/false field", [](Json& d) { circuit(d, 0, 0)["concealed_in_wall"] = "yes"; },
          "boards[0].circuits[0].concealed_in_wall", {"expected true or false", "got \"yes\""}},
         {"quantity of zero", [](Json& d) { d["observations"][0]["item_quantity"] = 0; },
@@ -263,6 +265,24 @@ TEST_CASE("io.survey: Diagnostic::to_string joins path and message", "[io][surve
     CHECK(Diagnostic{Severity::error, "tails.length_m", "expected a number > 0, got -3"}.to_string() ==
           "tails.length_m: expected a number > 0, got -3");
     CHECK(Diagnostic{Severity::error, "", "not valid JSON"}.to_string() == "not valid JSON");
+}
+
+}  // namespace mendwright::io::test
+
+namespace mendwright::io::test {
+
+TEST_CASE("io.survey: the version may be written 1.0 but not 1.5, and 2.0 is a newer version", "[io][survey]") {
+    Json doc = base_survey();
+    doc["version"] = 1.0;
+    CHECK(load(doc).ok());
+    doc["version"] = 1.5;
+    CHECK(at_path(load(doc), "version", Severity::error).size() == 1);
+    doc["version"] = 2.0;
+    const SurveyLoad newer = load(doc);
+    REQUIRE(newer.diagnostics.size() == 1);
+    CHECK_THAT(newer.diagnostics[0].message, Catch::Contains("version 2 of the survey format"));
+    doc["version"] = 1e300;
+    CHECK(at_path(load(doc), "version", Severity::error).size() == 1);
 }
 
 }  // namespace mendwright::io::test
