@@ -1,0 +1,96 @@
+// End-to-end: mendwright-cli quote on the invented demo jobs writes the workbook and reports
+// totals that add up; bad arguments name the flag and leave no file behind.
+#include <catch2/catch.hpp>
+
+#include <cmath>
+#include <filesystem>
+#include <fstream>
+#include <nlohmann/json.hpp>
+
+#include "tests/cli/calc_cli_run.hpp"
+
+namespace {
+
+const std::string demo_dir = std::string(MENDWRIGHT_SOURCE_DIR) + "/pricebook-demo";
+const std::string terrace = demo_dir + "/jobs/rented-terrace-tt-no-rcd.json";
+
+std::filesystem::path fresh_dir(const std::string& name) {
+    auto dir = std::filesystem::temp_directory_path() / ("mendwright-quote-cli-" + name);
+    std::filesystem::remove_all(dir);
+    std::filesystem::create_directories(dir);
+    return dir;
+}
+
+}  // namespace
+
+TEST_CASE("quote CLI: least-cost quote of a demo job writes a workbook whose totals add up", "[cli][quote]") {
+    const auto dir = fresh_dir("least-cost");
+    const auto out = dir / "Q-terrace.xlsx";
+    const auto run = calc_cli_test::run_cli({"quote", terrace, "--pricebook", demo_dir, "--plan", "least-cost", "--out",
+                                            out.string(), "--date", "2026-12-02", "--json"});
+    INFO(run.err);
+    REQUIRE(run.exit_code == 0);
+    const auto doc = nlohmann::json::parse(run.out);
+    CHECK(doc.at("file").get<std::string>() == out.string());
+    REQUIRE(std::filesystem::exists(out));
+    std::ifstream file(out, std::ios::binary);
+    char magic[2] = {};
+    file.read(magic, 2);
+    CHECK(std::string(magic, 2) == "PK");  // an .xlsx is a zip container (ECMA-376 Part 2, OPC)
+
+    long long lines_total = 0;
+    for (const auto& line : doc.at("lines")) {
+        CHECK(line.at("total_pence").get<long long>() ==
+              line.at("materials_pence").get<long long>() + line.at("labour_pence").get<long long>());
+        lines_total += line.at("total_pence").get<long long>();
+    }
+    CHECK(lines_total == doc.at("subtotal_pence").get<long long>());
+    const long long net = doc.at("net_pence").get<long long>();
+    CHECK(net == doc.at("subtotal_pence").get<long long>() + doc.at("contingency_pence").get<long long>() +
+                     doc.at("markup_pence").get<long long>());
+    // VAT at the demo price book's 20 % (the UK standard rate, VAT Act 1994 s.2), to the nearest penny.
+    CHECK(doc.at("vat_pence").get<long long>() == std::llround(net * 0.20));
+    CHECK(doc.at("total_pence").get<long long>() == net + doc.at("vat_pence").get<long long>());
+    CHECK_THAT(doc.at("caution").get<std::string>(), Catch::Contains("competent person"));
+}
+
+TEST_CASE("quote CLI: an unknown plan name is a usage error naming --plan", "[cli][quote]") {
+    const auto dir = fresh_dir("bad-plan");
+    const auto run = calc_cli_test::run_cli(
+        {"quote", terrace, "--pricebook", demo_dir, "--plan", "cheapest", "--out", (dir / "q.xlsx").string()});
+    CHECK(run.exit_code == 2);
+    CHECK_THAT(run.err, Catch::Contains("--plan") && Catch::Contains("least-cost, ideal or custom"));
+    CHECK(std::filesystem::is_empty(dir));
+}
+
+TEST_CASE("quote CLI: a custom plan needs --choose, and an unknown option id is named", "[cli][quote]") {
+    const auto dir = fresh_dir("custom");
+    auto run = calc_cli_test::run_cli(
+        {"quote", terrace, "--pricebook", demo_dir, "--plan", "custom", "--out", (dir / "q.xlsx").string()});
+    CHECK(run.exit_code == 2);
+    CHECK_THAT(run.err, Catch::Contains("--choose"));
+    run = calc_cli_test::run_cli({"quote", terrace, "--pricebook", demo_dir, "--plan", "custom", "--choose", "no-such-option",
+                                  "--out", (dir / "q.xlsx").string()});
+    CHECK(run.exit_code == 2);
+    CHECK_THAT(run.err, Catch::Contains("no-such-option"));
+    CHECK(std::filesystem::is_empty(dir));
+}
+
+TEST_CASE("quote CLI: a target folder that does not exist is an error and writes nothing", "[cli][quote]") {
+    const auto dir = fresh_dir("unwritable");
+    const auto target = dir / "missing-folder" / "q.xlsx";
+    const auto run = calc_cli_test::run_cli(
+        {"quote", terrace, "--pricebook", demo_dir, "--plan", "ideal", "--out", target.string(), "--date", "2026-12-02"});
+    CHECK(run.exit_code == 1);
+    CHECK_THAT(run.err, Catch::Contains("missing-folder"));
+    CHECK_FALSE(std::filesystem::exists(target));
+    CHECK(std::filesystem::is_empty(dir));
+}
+
+TEST_CASE("quote CLI: a malformed --date names the flag", "[cli][quote]") {
+    const auto dir = fresh_dir("bad-date");
+    const auto run = calc_cli_test::run_cli({"quote", terrace, "--pricebook", demo_dir, "--plan", "ideal", "--out",
+                                            (dir / "q.xlsx").string(), "--date", "02/12/2026"});
+    CHECK(run.exit_code == 2);
+    CHECK_THAT(run.err, Catch::Contains("--date") && Catch::Contains("YYYY-MM-DD"));
+}
