@@ -39,9 +39,8 @@ Result<CostedBill> cost_bill(const PriceBook& book, const std::vector<BillLine>&
         if (!costed_line) return costed_line.problem();
         costed.materials_pence += costed_line->materials_pence;
         costed.labour_pence += costed_line->labour_pence;
-        // Site hours: per-unit hours x quantity, to the nearest milli-hour (planning only, not money).
-        costed.labour_milli_hours += static_cast<MilliHours>(
-            (costed_line->labour_milli_hours_per_unit * costed_line->quantity_milli + 500) / 1000);
+        costed.labour_milli_hours +=
+            site_milli_hours(costed_line->labour_milli_hours_per_unit, costed_line->quantity_milli);  // R10
         costed.lines.push_back(std::move(costed_line).value());
     }
     costed.total_pence = costed.materials_pence + costed.labour_pence;

@@ -88,6 +88,10 @@ Pence percentage_of_pence(Pence total, BasisPoints rate) {
     return divide_half_up(static_cast<Wide>(total) * rate, 10'000);
 }
 
+MilliHours site_milli_hours(MilliHours labour_per_unit, MilliUnits quantity) {
+    return divide_half_up(static_cast<Wide>(labour_per_unit) * quantity, 1000);
+}
+
 std::string pence_text(Pence amount) { return fixed_text(amount, 2, false); }
 std::string milli_hours_text(MilliHours hours) { return fixed_text(hours, 3, true); }
 std::string basis_points_text(BasisPoints rate) { return fixed_text(rate, 2, true); }

@@ -22,6 +22,8 @@
 //   R9  All figures are >= 0, so "half up" and "half away from zero" agree; this is what a
 //       spreadsheet's ROUND(x, 2) does on the pound figure, which the exported workbook uses
 //       in the same places (R6, R8) so that it recalculates to the same pence.
+//   R10 Hours on site (for planning, not money) = hours per unit x quantity, to the nearest
+//       milli-hour, half up.
 
 #include <cstdint>
 #include <optional>
@@ -63,6 +65,9 @@ Pence line_labour_pence(MilliHours labour_per_unit, MilliUnits quantity, Pence l
 
 // R8: round_half_up(total x basis_points / 10000).
 Pence percentage_of_pence(Pence total, BasisPoints rate);
+
+// R10: round_half_up(milli_hours x quantity_milli / 1000).
+MilliHours site_milli_hours(MilliHours labour_per_unit, MilliUnits quantity);
 
 // Display: 123456 -> "1234.56" (no symbol, no separators); used in messages and CSV-like text.
 std::string pence_text(Pence amount);

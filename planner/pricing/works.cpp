@@ -92,8 +92,7 @@ WorksTotals total_works(const WorksList& works) {
     auto add_line = [&](const CostedLine& line) {
         totals.materials_pence += line.materials_pence;
         totals.labour_pence += line.labour_pence;
-        // Site hours for planning, to the nearest milli-hour (not money).
-        totals.labour_milli_hours += (line.labour_milli_hours_per_unit * line.quantity_milli + 500) / 1000;
+        totals.labour_milli_hours += site_milli_hours(line.labour_milli_hours_per_unit, line.quantity_milli);  // R10
         return line.total_pence();
     };
     for (const auto& group : works.groups) {
