@@ -83,6 +83,20 @@ Result<long long> ParsedArgs::whole_number(const std::string& flag, long long mi
     return value;
 }
 
+std::vector<std::string> ParsedArgs::word_list(const std::string& flag) const {
+    std::vector<std::string> words;
+    auto raw = text(flag);
+    if (!raw) return words;
+    std::stringstream stream(*raw);
+    std::string item;
+    while (std::getline(stream, item, ',')) {
+        while (!item.empty() && item.front() == ' ') item.erase(item.begin());
+        while (!item.empty() && item.back() == ' ') item.pop_back();
+        if (!item.empty()) words.push_back(item);
+    }
+    return words;
+}
+
 Result<std::vector<double>> ParsedArgs::number_list(const std::string& flag) const {
     auto raw = text(flag);
     if (!raw) return problem("--" + flag, "is required");

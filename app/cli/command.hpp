@@ -58,6 +58,9 @@ public:
     [[nodiscard]] Result<double> number(const std::string& flag, bool must_be_positive) const;
     [[nodiscard]] Result<double> number_or(const std::string& flag, double fallback, bool must_be_positive) const;
     [[nodiscard]] Result<long long> whole_number(const std::string& flag, long long minimum) const;
+    // A comma-separated list of words (option ids, ...), blanks trimmed, empty items dropped;
+    // empty when the flag was not given.
+    [[nodiscard]] std::vector<std::string> word_list(const std::string& flag) const;
     // A comma-separated list of finite numbers >= 0.
     [[nodiscard]] Result<std::vector<double>> number_list(const std::string& flag) const;
 };

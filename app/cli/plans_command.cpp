@@ -13,18 +13,6 @@
 namespace mendwright::cli {
 namespace {
 
-std::vector<std::string> split_ids(const std::string& text) {
-    std::vector<std::string> ids;
-    std::stringstream stream(text);
-    std::string item;
-    while (std::getline(stream, item, ',')) {
-        while (!item.empty() && item.front() == ' ') item.erase(item.begin());
-        while (!item.empty() && item.back() == ' ') item.pop_back();
-        if (!item.empty()) ids.push_back(item);
-    }
-    return ids;
-}
-
 std::string cell(const std::string& text, std::size_t width) {
     std::string out = text.size() > width ? text.substr(0, width) : text;
     out.resize(width, ' ');
@@ -75,8 +63,8 @@ int run_plans(const ParsedArgs& args, CommandContext& context) {
     RemedyInputs inputs;
     if (auto code = load_remedy_inputs(args, context, "plans", inputs)) return *code;
     std::vector<std::string> chosen;
-    if (auto text = args.text("choose")) {
-        chosen = split_ids(*text);
+    if (args.text("choose")) {
+        chosen = args.word_list("choose");
         if (chosen.empty()) return usage_error(context, "plans", problem("--choose", "expected option ids separated by commas"));
     }
     remedies::Analysis analysis;

@@ -18,18 +18,6 @@
 namespace mendwright::cli {
 namespace {
 
-std::vector<std::string> split_ids(const std::string& text) {
-    std::vector<std::string> ids;
-    std::stringstream stream(text);
-    std::string item;
-    while (std::getline(stream, item, ',')) {
-        while (!item.empty() && item.front() == ' ') item.erase(item.begin());
-        while (!item.empty() && item.back() == ' ') item.pop_back();
-        if (!item.empty()) ids.push_back(item);
-    }
-    return ids;
-}
-
 Date today() {
     const auto days = std::chrono::floor<std::chrono::days>(std::chrono::system_clock::now());
     const std::chrono::year_month_day ymd{days};
@@ -53,8 +41,7 @@ int run_quote(const ParsedArgs& args, CommandContext& context) {
     if (!plan_name) return usage_error(context, command, plan_name.problem());
     if (*plan_name != "least-cost" && *plan_name != "ideal" && *plan_name != "custom")
         return usage_error(context, command, problem("--plan", "expected least-cost, ideal or custom, got \"" + *plan_name + "\""));
-    std::vector<std::string> chosen_ids;
-    if (auto text = args.text("choose")) chosen_ids = split_ids(*text);
+    const std::vector<std::string> chosen_ids = args.word_list("choose");
     if (*plan_name == "custom" && chosen_ids.empty())
         return usage_error(context, command, problem("--choose", "expected option ids separated by commas with --plan custom"));
     if (*plan_name != "custom" && args.has("choose"))
