@@ -384,12 +384,8 @@ void JobSession::followStatus() {
         (void)workspace_->store().set_status(job_, store::JobStatus::in_progress, "remedial work started");
 }
 
-bool JobSession::markRemedied(const QString& finding_id) {
-    auto done = workspace_->store().mark_remedied(job_, finding_id.toStdString());
-    if (!done) {
-        setErrorText(qtext(done.error().to_string()));
-        return false;
-    }
+// After an urgent item changed state: the job's status follows it, and every view is refreshed.
+bool JobSession::afterUrgentItemChange() {
     reloadDetail();
     followStatus();
     reloadDetail();
@@ -400,20 +396,22 @@ bool JobSession::markRemedied(const QString& finding_id) {
     return true;
 }
 
+bool JobSession::markRemedied(const QString& finding_id) {
+    auto done = workspace_->store().mark_remedied(job_, finding_id.toStdString());
+    if (!done) {
+        setErrorText(qtext(done.error().to_string()));
+        return false;
+    }
+    return afterUrgentItemChange();
+}
+
 bool JobSession::markRetested(const QString& finding_id) {
     auto done = workspace_->store().mark_retested(job_, finding_id.toStdString());
     if (!done) {
         setErrorText(qtext(done.error().to_string()));
         return false;
     }
-    reloadDetail();
-    followStatus();
-    reloadDetail();
-    setErrorText({});
-    refreshUrgentRows();
-    Q_EMIT changed();
-    workspace_->notifyJobsChanged();
-    return true;
+    return afterUrgentItemChange();
 }
 
 QString JobSession::saveDocument(const std::string& document, bool record_undo) {

@@ -150,6 +150,7 @@ private:
     QString applyEdit(const std::function<std::string(model::Installation&)>& edit);
     void setErrorText(const QString& text);
     void followStatus();
+    bool afterUrgentItemChange();
     [[nodiscard]] const remedies::Plan* plan(const std::string& name) const;
     [[nodiscard]] QString findingTitle(const std::string& id) const;
     [[nodiscard]] std::optional<double> predictedElectrodeOhms() const;
