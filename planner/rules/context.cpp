@@ -1,5 +1,7 @@
 #include "planner/rules/context.hpp"
 
+#include "planner/calc/disconnection_time.hpp"
+
 #include <unordered_map>
 
 namespace mendwright::rules {
@@ -99,19 +101,15 @@ std::string AssessContext::device_text(const model::Device& device) {
     return kind + " " + device.id;
 }
 
-double AssessContext::required_disconnection_time_s(const CircuitEntry& entry) const {
-    const auto& limits = profile_.fault_protection;
+std::optional<double> AssessContext::required_disconnection_time_s(const CircuitEntry& entry) const {
     const auto& circuit = *entry.circuit;
-    // BS 7671 411.3.2.2: final circuits up to 63 A with socket-outlets, up to 32 A for fixed
-    // equipment, get the short times; 411.3.2.3/411.3.2.4: distribution and larger final circuits.
-    bool small_final = false;
-    if (!entry.is_submain()) {
-        const double largest = circuit.use == model::CircuitUse::sockets ? limits.final_circuit_with_sockets_max_amps
-                                                                         : limits.final_circuit_fixed_equipment_max_amps;
-        small_final = circuit.device.rating_amps <= largest;
-    }
-    if (is_tt()) return small_final ? limits.tt_final_circuit_s : limits.tt_distribution_circuit_s;
-    return small_final ? limits.tn_final_circuit_s : limits.tn_distribution_circuit_s;
+    // BS 7671 411.3.2.2-411.3.2.4 and Table 41.1, both held in planner/calc.
+    auto duty = calc::circuit_duty(entry.is_submain(), circuit.use == model::CircuitUse::sockets, circuit.device.rating_amps);
+    if (!duty.ok()) return std::nullopt;
+    auto time_s = calc::required_disconnection_time_s(is_tt() ? calc::EarthingSystem::tt : calc::EarthingSystem::tn, *duty,
+                                                      installation().supply.u0_volts);
+    if (!time_s.ok()) return std::nullopt;
+    return *time_s;
 }
 
 Finding AssessContext::new_finding(std::string_view rule_id, std::string_view case_name, const std::string& location_key,

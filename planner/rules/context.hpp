@@ -51,8 +51,9 @@ public:
     [[nodiscard]] static std::string circuit_text(const model::Circuit& circuit);
     [[nodiscard]] static std::string device_text(const model::Device& device);
 
-    // Table 41.1: the disconnection time a circuit needs, from the profile.
-    [[nodiscard]] double required_disconnection_time_s(const CircuitEntry& entry) const;
+    // Table 41.1 (held in planner/calc): the disconnection time a circuit needs; nullopt when
+    // the supply's U0 lies outside the band calc holds.
+    [[nodiscard]] std::optional<double> required_disconnection_time_s(const CircuitEntry& entry) const;
 
     // A finding of `rule_id` / `case_name` with id "<rule>@<location_key>", its code and clause
     // from the profile, and its place filled in from whichever of board/circuit/device is given.

@@ -93,12 +93,6 @@ FaultProtectionLimits read_fault_protection(ObjectReader object) {
     limits.touch_voltage_limit_volts = object.positive("touch_voltage_limit_volts");
     limits.cmin = object.positive("cmin", 1.0);
     limits.measured_zs_factor = object.positive("measured_zs_factor", 1.0);
-    limits.tn_final_circuit_s = object.positive("tn_final_circuit_s");
-    limits.tn_distribution_circuit_s = object.positive("tn_distribution_circuit_s");
-    limits.tt_final_circuit_s = object.positive("tt_final_circuit_s");
-    limits.tt_distribution_circuit_s = object.positive("tt_distribution_circuit_s");
-    limits.final_circuit_with_sockets_max_amps = object.positive("final_circuit_with_sockets_max_amps");
-    limits.final_circuit_fixed_equipment_max_amps = object.positive("final_circuit_fixed_equipment_max_amps");
     object.finish();
     return limits;
 }
@@ -143,10 +137,6 @@ RcdLimits read_rcd(ObjectReader object) {
     limits.selectivity_ratio = object.number("selectivity_ratio", 1.0, INFINITY, false);
     limits.additional_protection_max_idn_amps = object.positive("additional_protection_max_idn_amps");
     limits.socket_outlet_max_amps = object.positive("socket_outlet_max_amps");
-    limits.general_max_trip_ms_at_idn = object.positive("general_max_trip_ms_at_idn");
-    limits.general_max_trip_ms_at_5idn = object.positive("general_max_trip_ms_at_5idn");
-    limits.time_delayed_max_trip_ms_at_idn = object.positive("time_delayed_max_trip_ms_at_idn");
-    limits.time_delayed_max_trip_ms_at_5idn = object.positive("time_delayed_max_trip_ms_at_5idn");
     object.finish();
     return limits;
 }

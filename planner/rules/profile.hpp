@@ -29,14 +29,8 @@ struct FaultProtectionLimits {
     double touch_voltage_limit_volts = 0.0;  // UL, 411.5.3
     double cmin = 0.0;                       // Appendix 3 / 411.4.4
     double measured_zs_factor = 0.0;         // the "0.8 rule" for Zs measured at ambient temperature
-    // Table 41.1, 120 V < U0 <= 230 V, seconds.
-    double tn_final_circuit_s = 0.0;
-    double tn_distribution_circuit_s = 0.0;
-    double tt_final_circuit_s = 0.0;
-    double tt_distribution_circuit_s = 0.0;
-    // 411.3.2.2: the final circuits Table 41.1's short times apply to.
-    double final_circuit_with_sockets_max_amps = 0.0;
-    double final_circuit_fixed_equipment_max_amps = 0.0;
+    // Table 41.1's times and the circuits they apply to (411.3.2.2) are published values, not
+    // choices of practice: their one home is planner/calc/disconnection_time.hpp.
 
     bool operator==(const FaultProtectionLimits&) const = default;
 };
@@ -67,11 +61,8 @@ struct RcdLimits {
     double selectivity_ratio = 0.0;                    // upstream IΔn >= ratio x downstream IΔn
     double additional_protection_max_idn_amps = 0.0;   // 415.1.1: IΔn <= 30 mA
     double socket_outlet_max_amps = 0.0;               // 411.3.3: socket-outlets <= 32 A
-    // BS EN 61008-1 / 61009-1 maximum break times, milliseconds.
-    double general_max_trip_ms_at_idn = 0.0;
-    double general_max_trip_ms_at_5idn = 0.0;
-    double time_delayed_max_trip_ms_at_idn = 0.0;
-    double time_delayed_max_trip_ms_at_5idn = 0.0;
+    // The BS EN 61008-1 / 61009-1 break times are published values: their one home is
+    // planner/calc/rcd.hpp (rcd_time_limits).
 
     bool operator==(const RcdLimits&) const = default;
 };

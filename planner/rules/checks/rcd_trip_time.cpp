@@ -1,10 +1,11 @@
 // RCD trip times measured at the circuits against the maximum break times for the device's type
-// (BS EN 61008-1 / 61009-1, read: general 300 ms at IΔn, 40 ms at 5 IΔn; S-type 500 / 150 ms;
+// (BS EN 61008-1 / 61009-1, held in planner/calc/rcd.hpp: general 300 ms at IΔn, 40 ms at 5 IΔn; S-type 500 / 150 ms;
 // 40 ms at 5 IΔn is also what 415.1.1 asks of additional protection). The device tested from a
 // circuit is the nearest RCD or RCBO above it; one finding per device, giving the slowest times.
 #include <algorithm>
 #include <map>
 
+#include "planner/calc/rcd.hpp"
 #include "planner/rules/checks/checks.hpp"
 #include "planner/rules/checks/common.hpp"
 #include "planner/rules/text.hpp"
@@ -28,7 +29,6 @@ void keep_slowest(std::optional<double>& slowest, const std::optional<double>& m
 
 std::vector<Finding> rcd_trip_time(const AssessContext& context) {
     std::vector<Finding> findings;
-    const auto& limits = context.profile().rcd;
     std::map<const model::Device*, Slowest> tested;
     for (const auto& entry : context.circuits()) {
         const auto& circuit = *entry.circuit;
@@ -50,8 +50,10 @@ std::vector<Finding> rcd_trip_time(const AssessContext& context) {
     for (const Slowest* result : ordered) {
         const auto& device = *result->ref->device;
         const bool delayed = device.delay == model::RcdDelay::time_delayed;
-        const double max_at_idn_ms = delayed ? limits.time_delayed_max_trip_ms_at_idn : limits.general_max_trip_ms_at_idn;
-        const double max_at_5idn_ms = delayed ? limits.time_delayed_max_trip_ms_at_5idn : limits.general_max_trip_ms_at_5idn;
+        // BS EN 61008-1 / 61009-1 maximum break times at IΔn and 5 IΔn, held in planner/calc.
+        const auto type = delayed ? calc::RcdType::time_delayed : calc::RcdType::general;
+        const double max_at_idn_ms = calc::rcd_time_limits(type, 1.0)->max_break_s * 1000.0;
+        const double max_at_5idn_ms = calc::rcd_time_limits(type, 5.0)->max_break_s * 1000.0;
         std::vector<std::string> failures;
         if (result->at_idn_ms && *result->at_idn_ms > max_at_idn_ms)
             failures.push_back("at IΔn " + number_text(*result->at_idn_ms) + " ms > " + number_text(max_at_idn_ms) + " ms");

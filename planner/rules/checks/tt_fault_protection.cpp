@@ -34,20 +34,22 @@ std::optional<Finding> without_rcd(const AssessContext& context, const CircuitEn
     const auto& circuit = *entry.circuit;
     const auto& device = circuit.device;
     const double u0_volts = context.installation().supply.u0_volts;
-    const double time_s = context.required_disconnection_time_s(entry);
+    const std::optional<double> time_s = context.required_disconnection_time_s(entry);
     const auto loop = fault_loop(circuit, ra_ohms);
 
     Finding finding = context.new_finding(rule_id, "no_rcd", "circuit:" + circuit.id, entry.board, &circuit, &device);
     finding.title = "No RCD: fault protection in a TT system not achieved";
     finding.inputs.push_back(text_input("device", device_rating_text(device)));
     finding.inputs.push_back(number_input("U0", u0_volts, "V"));
-    finding.inputs.push_back(number_input("disconnection time required", time_s, "s"));
+    if (time_s) finding.inputs.push_back(number_input("disconnection time required", *time_s, "s"));
     if (ra_ohms) finding.inputs.push_back(number_input("RA", *ra_ohms, "Ω"));
     if (circuit.measured_zs_ohms) finding.inputs.push_back(number_input("Zs measured", *circuit.measured_zs_ohms, "Ω"));
     if (circuit.r1_plus_r2_ohms) finding.inputs.push_back(number_input("R1+R2", *circuit.r1_plus_r2_ohms, "Ω"));
 
     const std::string lead = "No RCD above this circuit in a TT system. ";
-    const std::string within = " within " + number_text(time_s) + " s (Table 41.1, TT)";
+    const std::string within = time_s ? " within " + number_text(*time_s) + " s (Table 41.1, TT)"
+                                      : " within the Table 41.1 time for U0 " + number_text(u0_volts) +
+                                            " V (not held: only 120 V < U0 <= 230 V is)";
     const std::string device_words = device_rating_text(device);
     if (!loop) {
         finding.explanation = lead + "Neither Zs nor RA is recorded, so the fault current cannot be computed; the " +

@@ -49,11 +49,6 @@ TEST_CASE("rules profile: the default holds BS 7671:2018+A2 values", "[rules][pr
     // Appendix 3 / 411.4.4 (read): Cmin 0.95; the 0.8 rule (GN3, read).
     CHECK(profile.fault_protection.cmin == 0.95);
     CHECK(profile.fault_protection.measured_zs_factor == 0.8);
-    // Table 41.1, 120 V < U0 <= 230 V (read): TN 0.4 / 5 s, TT 0.2 / 1 s.
-    CHECK(profile.fault_protection.tn_final_circuit_s == 0.4);
-    CHECK(profile.fault_protection.tn_distribution_circuit_s == 5.0);
-    CHECK(profile.fault_protection.tt_final_circuit_s == 0.2);
-    CHECK(profile.fault_protection.tt_distribution_circuit_s == 1.0);
     // Table 41.5 note (read): 200 Ω; target 100 Ω (common practice).
     CHECK(profile.electrode.stability_limit_ohms == 200.0);
     CHECK(profile.electrode.target_ohms == 100.0);
@@ -64,11 +59,6 @@ TEST_CASE("rules profile: the default holds BS 7671:2018+A2 values", "[rules][pr
     CHECK(profile.rcd.leakage_fraction == 0.3);
     CHECK(profile.rcd.selectivity_ratio == 3.0);
     CHECK(profile.rcd.additional_protection_max_idn_amps == 0.03);
-    // BS EN 61008-1 (read): 300 / 40 ms general, 500 / 150 ms S-type.
-    CHECK(profile.rcd.general_max_trip_ms_at_idn == 300.0);
-    CHECK(profile.rcd.general_max_trip_ms_at_5idn == 40.0);
-    CHECK(profile.rcd.time_delayed_max_trip_ms_at_idn == 500.0);
-    CHECK(profile.rcd.time_delayed_max_trip_ms_at_5idn == 150.0);
     // BS EN 61439-3 Annex ZB (read): 16 kA under a <= 100 A BS 1361 / BS 88-3 fuse.
     CHECK(profile.breaking_capacity.conditional_rating_ka == 16.0);
     CHECK(profile.breaking_capacity.supply_fuse_max_amps == 100.0);

@@ -119,3 +119,32 @@ TEST_CASE("rules tt.fault_protection: the touch-voltage limit comes from the pro
                                         {circuit("c1", model::CircuitUse::cooker, breaker("cb1", model::BreakerCurve::b, 32), "rcd1")}));
     CHECK(finding_with_id(rules::assess(installation, profile), "tt.fault_protection@circuit:c1") != std::nullopt);
 }
+
+TEST_CASE("rules tt.fault_protection: a U0 outside the held Table 41.1 band names no time rather than guess one", "[rules][tt]") {
+    // Table 41.1 is held for 120 V < U0 <= 230 V only (read); at U0 240 V the 230-400 V band would
+    // apply, which planner/calc does not hold, so the finding must not quote 0.2 s.
+    auto installation = tt_dwelling(45.0);
+    installation.supply.u0_volts = 240.0;
+    auto c1 = circuit("c1", model::CircuitUse::sockets, breaker("cb1", model::BreakerCurve::b, 32));
+    c1.r1_plus_r2_ohms = 0.62;
+    installation.boards.push_back(board("cu", {main_switch("ms")}, {c1}));
+    const auto findings = assess_default(installation);
+    auto finding = finding_with_id(findings, "tt.fault_protection@circuit:c1");
+    REQUIRE(finding);
+    CHECK(finding->code == rules::Code::c2);
+    CHECK(finding->explanation.find("0.2 s") == std::string::npos);
+    CHECK(finding->explanation.find("Table 41.1 time for U0 240 V (not held") != std::string::npos);
+}
+
+TEST_CASE("rules tt.fault_protection: a 40 A cooker circuit (fixed equipment) gets the 1 s distribution time", "[rules][tt]") {
+    // 411.3.2.2 (read): the short times apply to final circuits up to 32 A for fixed equipment;
+    // above that Table 41.1 gives TT 1 s (read).
+    auto installation = tt_dwelling(45.0);
+    auto c1 = circuit("c1", model::CircuitUse::cooker, breaker("cb1", model::BreakerCurve::b, 40));
+    c1.r1_plus_r2_ohms = 0.3;
+    installation.boards.push_back(board("cu", {main_switch("ms")}, {c1}));
+    const auto findings = assess_default(installation);
+    auto finding = finding_with_id(findings, "tt.fault_protection@circuit:c1");
+    REQUIRE(finding);
+    CHECK(finding->explanation.find("within 1 s (Table 41.1, TT)") != std::string::npos);
+}

@@ -26,6 +26,22 @@ TEST_CASE("calc reference: one rod, rho 200, 3.0 m, 20 mm gives 64.6 ohm") {
     CHECK(*r == Approx(64.6).margin(0.05));
 }
 
+// A published worked example: "Getting Down to Earth - a practical guide to earth resistance
+// testing" (2010 edition), Appendix I, Fig. 21 and its text: a 5/8 in rod driven 10 ft that reads
+// 6.6 ohm lies in soil of 2000 ohm cm. The nomograph is drawn from the single-rod formula, so the
+// formula must give 6.6 ohm at the printed precision for 20 ohm m, 3.048 m, 15.875 mm, and the
+// back-calculation must give 2000 ohm cm (20 ohm m) at the nomograph's reading precision.
+TEST_CASE("calc reference: the published nomograph example, 5/8 in x 10 ft rod in 2000 ohm cm reads 6.6 ohm") {
+    const double length_m = 10.0 * 0.3048;          // 10 ft, exact conversion
+    const double diameter_m = 0.625 * 0.0254;       // 5/8 in, exact conversion
+    auto r = rod_resistance_ohms(20.0, length_m, diameter_m);
+    REQUIRE(r.ok());
+    CHECK(std::round(*r * 10.0) / 10.0 == Approx(6.6));
+    auto rho = mendwright::calc::resistivity_from_rod_ohm_m(6.6, length_m, diameter_m);
+    REQUIRE(rho.ok());
+    CHECK(std::round(*rho) == Approx(20.0));
+}
+
 namespace {
 
 // Howe's average-potential method (the physics Dwight's formula approximates; from memory):
