@@ -43,5 +43,9 @@ TEST_CASE("rules tails.origin_protection: any buried length without protection i
     const auto buried = tails_findings(0.5, model::TailsRoute::buried);
     REQUIRE(buried.size() == 1);
     CHECK(buried[0].code == rules::Code::c2);
+    // The 0 m limit is said in words, not as "> 0 m".
+    CHECK(buried[0].explanation.find("Tails 0.5 m buried (not mechanically protected): no length buried is accepted unprotected") !=
+          std::string::npos);
+    CHECK(buried[0].explanation.find("> 0 m") == std::string::npos);
     CHECK(tails_findings(12.0, model::TailsRoute::buried, false, model::TailsOriginProtection::switch_fuse).empty());
 }
