@@ -124,13 +124,24 @@ void Writer::quote_sheet_contents() {
     lxw_row_t row = row_table_header + 1;
     first_line_row = row;
 
-    std::map<std::string, std::string> code_of_finding;
-    for (const auto& quoted : quote.findings) code_of_finding[quoted.finding.id] = quoted.finding.code;
+    // What a client reads for a finding: its code, title and place ("C2 No RCD ... (Kitchen
+    // sockets)"); the finding's id stays on the Findings sheet for cross-reference.
+    std::map<std::string, std::string> words_of_finding;
+    for (const auto& quoted : quote.findings) {
+        const auto& finding = quoted.finding;
+        words_of_finding[finding.id] =
+            finding.code + " " + finding.title + (finding.location.empty() ? std::string() : " (" + finding.location + ")");
+    }
+    constexpr std::size_t merged_width_chars = 150;
 
     auto write_lines = [&](const std::string& heading, const std::vector<CostedLine>& lines, const std::string& prefix,
-                           Pence group_pence) {
+                           Pence group_pence, const std::string& puts_right) {
         sheet.merged_text(row, col_code, col_line_total, heading, f.group, 15);
         ++row;
+        if (!puts_right.empty()) {
+            sheet.merged_text(row, col_code, col_line_total, puts_right, f.wrap, wrapped_height(puts_right, merged_width_chars));
+            ++row;
+        }
         const lxw_row_t first = row;
         for (std::size_t i = 0; i < lines.size(); ++i, ++row) {
             const CostedLine& line = lines[i];
@@ -166,15 +177,14 @@ void Writer::quote_sheet_contents() {
         const auto& group = quote.works.groups[g];
         std::vector<std::string> clears;
         for (const auto& id : group.clears_findings) {
-            auto code = code_of_finding.find(id);
-            clears.push_back(code == code_of_finding.end() ? id : id + " (" + code->second + ")");
+            auto words = words_of_finding.find(id);
+            clears.push_back(words == words_of_finding.end() ? id : words->second);
         }
-        const std::string heading =
-            group.title + (clears.empty() ? std::string() : "  -  clears " + joined(clears, ", "));
-        write_lines(heading, group.lines, "group[" + std::to_string(g) + "]", totals.group_pence[g]);
+        const std::string puts_right = clears.empty() ? std::string() : "Puts right: " + joined(clears, "; ");
+        write_lines(group.title, group.lines, "group[" + std::to_string(g) + "]", totals.group_pence[g], puts_right);
     }
     if (!quote.works.extra_lines.empty()) {
-        write_lines("Additional items", quote.works.extra_lines, "extras", totals.extras_pence);
+        write_lines("Additional items", quote.works.extra_lines, "extras", totals.extras_pence, std::string());
     }
     last_line_row = row - 2;
 
@@ -218,7 +228,6 @@ void Writer::quote_sheet_contents() {
     sheet.number(row, col_line_total, hours(totals.labour_milli_hours), f.number);
     row += 2;
 
-    constexpr std::size_t merged_width_chars = 150;
     auto paragraph_list = [&](const std::string& heading, const std::vector<std::string>& items) {
         sheet.text(row++, col_code, heading, f.label);
         for (const auto& item : items) {

@@ -91,6 +91,13 @@ def check_structure(base, expected):
     texts = [c.value for row in quote.iter_rows() for c in row if isinstance(c.value, str)]
     for phrase in ("planning aid", "competent person", "Local regulations", "re-measured"):
         check(any(phrase in t for t in texts), f"{name}: the caution mentioning {phrase!r} is missing")
+    # Each priced option says, in the client's words, what it puts right: code, title and place
+    # of each finding, never our internal finding ids (common practice: a quote a client can read).
+    puts_right = [t for t in texts if t.startswith("Puts right: ")]
+    if name == "sample-quote":
+        check(any("C2 No device gives fault protection: RA 310 ohm, no RCD (Consumer unit, hall)" in t
+                  for t in puts_right), f"{name}: no line says the first option puts right the C2 finding: {puts_right!r}")
+    check(not any("@" in t for t in puts_right), f"{name}: a 'Puts right' line shows finding ids: {puts_right!r}")
     for sheet in SHEETS[1:]:
         check(formulas[sheet].freeze_panes is not None, f"{name}: {sheet} has no frozen header")
         check(int(formulas[sheet].page_setup.paperSize) == 9, f"{name}: {sheet} is not set to A4")
