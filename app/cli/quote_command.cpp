@@ -1,5 +1,5 @@
 // `mendwright-cli quote FILE --pricebook DIR --plan least-cost|ideal|custom [--choose IDS]
-//  --out quote.xlsx [--number Q] [--date YYYY-MM-DD] [--profile FILE] [--json]`:
+//  --out quote.xlsx [--extra-lines FILE.csv] [--number Q] [--date YYYY-MM-DD] [--profile FILE] [--json]`:
 // the chosen plan priced from the price book, beside the alternative plan, written as the
 // client's quote workbook.
 #include <chrono>
@@ -11,6 +11,7 @@
 #include "app/cli/command.hpp"
 #include "app/cli/remedies_input.hpp"
 #include "planner/export/quote_workbook.hpp"
+#include "planner/pricing/extra_lines.hpp"
 #include "planner/pricing/money.hpp"
 #include "planner/remedies/plans.hpp"
 #include "planner/remedies/quote_request.hpp"
@@ -55,6 +56,17 @@ int run_quote(const ParsedArgs& args, CommandContext& context) {
         quote_date = parsed.value();
     }
 
+    // Free lines beyond the plan's options, read before the analysis so a bad file fails fast.
+    std::vector<pricing::ExtraLine> extra_lines;
+    if (auto extras_path = args.text("extra-lines")) {
+        auto read = pricing::read_extra_lines(*extras_path);
+        if (!read) {
+            context.err << "mendwright-cli " << command << ": --extra-lines: " << read.problem().to_string() << "\n";
+            return exit_invalid_input;
+        }
+        extra_lines = std::move(read).value();
+    }
+
     RemedyInputs inputs;
     if (auto code = load_remedy_inputs(args, context, command, inputs)) return *code;
     remedies::Analysis analysis;
@@ -84,6 +96,12 @@ int run_quote(const ParsedArgs& args, CommandContext& context) {
     if (!request) {
         context.err << "mendwright-cli " << command << ": " << request.problem().to_string() << "\n";
         return exit_invalid_input;
+    }
+    for (const auto& extra : extra_lines) {
+        if (auto refused = pricing::add_extra_line(request.value().works, extra)) {
+            context.err << "mendwright-cli " << command << ": --extra-lines: " << refused->to_string() << "\n";
+            return exit_invalid_input;
+        }
     }
     auto quote = pricing::make_quote(std::move(request).value());
     if (!quote) {
@@ -138,6 +156,7 @@ int run_quote(const ParsedArgs& args, CommandContext& context) {
      {"plan", "least-cost|ideal|custom", "which plan to quote; the other of least-cost/ideal goes beside it"},
      {"choose", "ID,ID,...", "option ids of a custom plan (with --plan custom)"},
      {"out", "FILE.xlsx", "where to write the workbook (written whole, or not at all)"},
+     {"extra-lines", "FILE.csv", "free lines to add (description,unit,quantity,material_cost,labour_hours[,note])"},
      {"number", "Q", "quote number (default: Q-<job reference>)"},
      {"date", "YYYY-MM-DD", "quote date (default: today)"},
      {"profile", "FILE", "rules profile JSON (default: the shipped profile)"},

@@ -94,3 +94,39 @@ TEST_CASE("quote CLI: a malformed --date names the flag", "[cli][quote]") {
     CHECK(run.exit_code == 2);
     CHECK_THAT(run.err, Catch::Contains("--date") && Catch::Contains("YYYY-MM-DD"));
 }
+
+TEST_CASE("quote CLI: free lines from --extra-lines are priced into the quote by the money rules", "[cli][quote]") {
+    const auto dir = fresh_dir("extra-lines");
+    const auto extras = dir / "extras.csv";
+    std::ofstream(extras) << "# invented free lines\n"
+                             "description,unit,quantity,material_cost,labour_hours,note\n"
+                             "\"Lift and refit floorboards, landing\",each,2,1.35,0.5,invented\n";
+    const auto out = dir / "q.xlsx";
+    const auto run = calc_cli_test::run_cli({"quote", terrace, "--pricebook", demo_dir, "--plan", "least-cost", "--out",
+                                            out.string(), "--extra-lines", extras.string(), "--json"});
+    INFO(run.err);
+    REQUIRE(run.exit_code == 0);
+    const auto doc = nlohmann::json::parse(run.out);
+    const nlohmann::json* free_line = nullptr;
+    for (const auto& line : doc.at("lines"))
+        if (line.at("description") == "Lift and refit floorboards, landing") free_line = &line;
+    REQUIRE(free_line);
+    CHECK(free_line->at("option") == "");
+    CHECK(free_line->at("quantity").get<double>() == 2.0);
+    // Hand-worked: materials 2 x £1.35 = £2.70; labour 2 x 0.5 h x the demo rate of £48.00/h = £48.00.
+    CHECK(free_line->at("materials_pence").get<long long>() == 270);
+    CHECK(free_line->at("labour_pence").get<long long>() == 4800);
+}
+
+TEST_CASE("quote CLI: a bad --extra-lines file names the file, line and column and writes nothing", "[cli][quote]") {
+    const auto dir = fresh_dir("extra-lines-bad");
+    const auto extras = dir / "extras.csv";
+    std::ofstream(extras) << "description,unit,quantity,material_cost,labour_hours\n"
+                             "Make good plaster,each,two,5.00,1\n";
+    const auto out = dir / "q.xlsx";
+    const auto run = calc_cli_test::run_cli({"quote", terrace, "--pricebook", demo_dir, "--plan", "least-cost", "--out",
+                                            out.string(), "--extra-lines", extras.string()});
+    CHECK(run.exit_code == 3);
+    CHECK_THAT(run.err, Catch::Contains("extras.csv:2:quantity") && Catch::Contains("got \"two\""));
+    CHECK_FALSE(std::filesystem::exists(out));
+}
