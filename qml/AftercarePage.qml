@@ -47,6 +47,9 @@ FocusScope {
                 onRetested: (findingId) => root.session.markRetested(findingId)
             }
             Keys.onPressed: (event) => {
+                // A list filled after it was made has no current row yet: start at the first
+                // item not re-tested.
+                if (currentIndex < 0) currentIndex = root.firstUnfinished()
                 const row = root.session.urgentItems.get(currentIndex)
                 if (row.findingId === undefined) return
                 if (event.key === Qt.Key_R && event.modifiers === Qt.NoModifier) { root.session.markRemedied(row.findingId); event.accepted = true }

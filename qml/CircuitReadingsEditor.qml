@@ -2,14 +2,11 @@ import QtQuick
 import QtQuick.Layouts
 import Mendwright.Models
 
-// One circuit's measured values, each with its unit and accepted range.
-Rectangle {
+// One circuit's measured values, each with its unit and accepted range (empty = not measured).
+RowLayout {
     id: root
     required property JobSession session
     required property string circuitId
-    required property string board
-    required property string number
-    required property string description
     required property string zs
     required property string r1r2
     required property string ir
@@ -17,37 +14,22 @@ Rectangle {
     required property string tripIdn
     required property string trip5Idn
     required property bool residualCurrent
+    spacing: Theme.step
 
-    color: Theme.surface
-    border.color: Theme.line
-    radius: Theme.radius
-    implicitHeight: body.implicitHeight + Theme.step * 2
-
-    ColumnLayout {
-        id: body
-        anchors.left: parent.left; anchors.right: parent.right; anchors.top: parent.top
-        anchors.margins: Theme.step
-        spacing: 4
-        BodyText { text: qsTr("%1 · circuit %2 · %3").arg(root.board).arg(root.number).arg(root.description); font.bold: true }
-        RowLayout {
-            spacing: Theme.step
+    Repeater {
+        model: [["zs", root.zs], ["r1r2", root.r1r2], ["ir", root.ir], ["leakage", root.leakage],
+                ["tripIdn", root.tripIdn], ["trip5Idn", root.trip5Idn]]
+        delegate: FieldEditor {
+            required property var modelData
+            readonly property var spec: root.session.fieldSpec(modelData[0])
+            visible: root.residualCurrent || (modelData[0] !== "tripIdn" && modelData[0] !== "trip5Idn")
             Layout.fillWidth: true
-            Repeater {
-                model: [["zs", root.zs], ["r1r2", root.r1r2], ["ir", root.ir], ["leakage", root.leakage],
-                        ["tripIdn", root.tripIdn], ["trip5Idn", root.trip5Idn]]
-                delegate: FieldEditor {
-                    required property var modelData
-                    readonly property var spec: root.session.fieldSpec(modelData[0])
-                    visible: root.residualCurrent || (modelData[0] !== "tripIdn" && modelData[0] !== "trip5Idn")
-                    Layout.fillWidth: true
-                    Layout.preferredWidth: 1
-                    label: spec.label
-                    unit: spec.unit
-                    range: spec.range
-                    value: modelData[1]
-                    commit: (text) => root.session.editCircuit(root.circuitId, modelData[0], text)
-                }
-            }
+            Layout.preferredWidth: 1
+            label: spec.label
+            unit: spec.unit
+            range: spec.range
+            value: modelData[1]
+            commit: (text) => root.session.editCircuit(root.circuitId, modelData[0], text)
         }
     }
 }

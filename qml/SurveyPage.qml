@@ -3,8 +3,9 @@ import QtQuick.Controls
 import QtQuick.Layouts
 import Mendwright.Models
 
-// Entering or correcting the survey: the electrode, each circuit's measured values and the
-// recorded observations. Every accepted edit is saved as a new revision; Ctrl+Z and
+// Entering or correcting the survey: supply and earthing, meter tails, the electrode, boards with
+// their device trees, circuits with their devices, cables and measured values, and the recorded
+// observations. Every accepted edit is saved as a new revision; Ctrl+Z and
 // Ctrl+Shift+Z step back and forward (each step is itself a revision).
 FocusScope {
     id: root
@@ -30,53 +31,32 @@ FocusScope {
                 ActionButton { text: qsTr("Redo"); hint: "Ctrl+Shift+Z"; enabled: root.session.canRedo; onClicked: root.session.redo() }
             }
 
-            // Electrode.
-            Rectangle {
-                visible: root.session.hasElectrode
+            BodyText {
+                text: qsTr("Each accepted change is saved as a new revision and the findings, options and plans are worked out again. "
+                           + "A refused value keeps the last saved one and says what was expected.")
+                muted: true
                 Layout.fillWidth: true
-                color: Theme.surface; border.color: Theme.line; radius: Theme.radius
-                implicitHeight: electrodeRow.implicitHeight + Theme.step * 3
-                ColumnLayout {
-                    id: electrodeRow
-                    anchors.left: parent.left; anchors.right: parent.right; anchors.top: parent.top
-                    anchors.margins: Theme.step * 1.5
-                    BodyText { text: qsTr("Earth electrode (%1 rods)").arg(root.session.electrode.rods || 0); font.bold: true }
-                    RowLayout {
-                        spacing: Theme.step * 2
-                        FieldEditor {
-                            id: raField
-                            Layout.preferredWidth: 240
-                            label: qsTr("RA measured")
-                            unit: "Ω"
-                            range: root.session.fieldSpec("ra").range
-                            value: root.session.electrode.ra || ""
-                            commit: (text) => root.session.editElectrode("ra", text)
-                        }
-                        FieldEditor {
-                            Layout.preferredWidth: 200
-                            label: qsTr("Measured on")
-                            unit: qsTr("date")
-                            range: qsTr("YYYY-MM-DD")
-                            value: root.session.electrode.measuredOn || ""
-                            commit: (text) => root.session.editElectrode("measuredOn", text)
-                        }
-                        FieldEditor {
-                            Layout.preferredWidth: 260
-                            label: qsTr("Soil resistivity")
-                            unit: "Ω·m"
-                            range: root.session.fieldSpec("resistivity").range
-                            value: root.session.electrode.resistivity || ""
-                            commit: (text) => root.session.editElectrode("resistivity", text)
-                        }
-                    }
+            }
+
+            SupplyEditor { Layout.fillWidth: true; session: root.session }
+            ElectrodeEditor { Layout.fillWidth: true; session: root.session }
+
+            // Boards with their device trees.
+            BodyText { text: qsTr("Boards and their devices"); font.bold: true; font.pixelSize: Theme.headingSize }
+            Repeater {
+                model: root.session.boards
+                delegate: BoardEditor {
+                    Layout.fillWidth: true
+                    session: root.session
                 }
             }
 
             // Circuits.
-            BodyText { text: qsTr("Circuits: measured values (empty = not measured)"); font.bold: true; font.pixelSize: Theme.headingSize }
+            BodyText { text: qsTr("Circuits: devices, cables and measured values (empty = not measured)"); font.bold: true; font.pixelSize: Theme.headingSize }
+            BodyText { text: qsTr("No circuits yet: add one from its board above."); visible: root.session.circuits.count === 0; muted: true }
             Repeater {
                 model: root.session.circuits
-                delegate: CircuitReadingsEditor {
+                delegate: CircuitEditor {
                     Layout.fillWidth: true
                     session: root.session
                 }

@@ -4,8 +4,6 @@
 #include <algorithm>
 
 #include "app/desktop/quote_assembly.hpp"
-#include "app/desktop/snapshot.hpp"
-#include "app/desktop/survey_fields.hpp"
 #include "app/desktop/workspace.hpp"
 #include "planner/export/quote_workbook.hpp"
 #include "planner/io/survey_document.hpp"
@@ -48,10 +46,21 @@ JobSession::JobSession(QObject* parent)
       urgent_model_(new RecordListModel({"findingId", "code", "codeWords", "title", "location", "due", "state",
                                          "stateLabel", "remediedOn", "retestedOn", "overdue"},
                                         this)),
-      circuits_model_(new RecordListModel({"circuitId", "board", "number", "description", "zs", "r1r2", "ir", "leakage",
-                                           "tripIdn", "trip5Idn", "residualCurrent"},
+      circuits_model_(new RecordListModel({"circuitId", "boardId", "board", "number", "description", "use", "upstream",
+                                           "upstreamChoices", "lineCsa", "cpcCsa", "length", "concealed", "outdoor",
+                                           "submain", "zs", "r1r2", "ir", "leakage", "tripIdn", "trip5Idn", "deviceId",
+                                           "kind", "kindText", "rating", "curve", "breakingCapacity", "idn", "rcdType",
+                                           "delay", "fuseStandard", "label", "residualCurrent", "hasCurve", "fused",
+                                           "summary"},
                                           this)),
-      observations_model_(new RecordListModel({"observationId", "code", "text", "location", "itemCode"}, this)) {}
+      observations_model_(new RecordListModel({"observationId", "code", "text", "location", "itemCode"}, this)),
+      boards_model_(new RecordListModel({"boardId", "name", "location", "enclosure", "spareWays", "acceptsRcbos", "surge",
+                                         "origin", "supplied", "deviceCount", "upstreamChoices", "circuitCount"},
+                                        this)),
+      devices_model_(new RecordListModel({"boardId", "deviceId", "depth", "upstream", "upstreamChoices", "kind", "kindText",
+                                          "rating", "curve", "breakingCapacity", "idn", "rcdType", "delay", "fuseStandard",
+                                          "label", "residualCurrent", "hasCurve", "fused", "summary"},
+                                         this)) {}
 
 JobSession::~JobSession() {
     analysis_.reset();  // before the installation it refers to
@@ -412,152 +421,6 @@ bool JobSession::markRetested(const QString& finding_id) {
         return false;
     }
     return afterUrgentItemChange();
-}
-
-QString JobSession::saveDocument(const std::string& document, bool record_undo) {
-    const io::SurveyLoad survey = io::read_survey(document);
-    if (!survey.ok()) return qtext(first_error(survey));
-    auto saved = workspace_->store().save_revision(job_, detail_.latest_revision,
-                                                   survey_snapshot(*survey.installation, document, workspace_->profile()));
-    if (!saved) return qtext(saved.error().to_string());
-    if (record_undo) {
-        undo_.push_back(document_);
-        redo_.clear();
-    }
-    load();
-    workspace_->notifyJobsChanged();
-    return {};
-}
-
-QString JobSession::applyEdit(const std::function<std::string(model::Installation&)>& edit) {
-    if (!installation_) return tr("no job open");
-    model::Installation copy = *installation_;
-    if (std::string refused = edit(copy); !refused.empty()) return qtext(refused);
-    return saveDocument(io::write_survey(copy), true);
-}
-
-QString JobSession::editCircuit(const QString& circuit_id, const QString& field, const QString& text) {
-    const SurveyField* spec = survey_field(field.toStdString());
-    if (!spec) return tr("no such field: %1").arg(field);
-    return applyEdit([&](model::Installation& installation) -> std::string {
-        std::string error;
-        const auto value = read_field(*spec, text.toStdString(), error);
-        if (!error.empty()) return error;
-        for (auto& board : installation.boards)
-            for (auto& circuit : board.circuits)
-                if (circuit.id == circuit_id.toStdString()) {
-                    if (circuit_value(circuit, spec->key) == value) return "unchanged";
-                    set_circuit_value(circuit, spec->key, value);
-                    return {};
-                }
-        return "no circuit " + circuit_id.toStdString();
-    });
-}
-
-QString JobSession::editElectrode(const QString& field, const QString& text) {
-    const std::string key = field.toStdString();
-    QString result = applyEdit([&](model::Installation& installation) -> std::string {
-        if (!installation.electrode) return "this installation has no earth electrode recorded";
-        model::Electrode& electrode = *installation.electrode;
-        if (key == "measuredOn" || key == "remeasuredOn") {
-            const std::string trimmed = text.trimmed().toStdString();
-            std::optional<Date> date;
-            if (!trimmed.empty()) {
-                auto parsed = parse_iso_date(trimmed, key == "measuredOn" ? "measured on" : "re-measured on");
-                if (!parsed) return parsed.problem().to_string() + " (a date like 2026-03-14)";
-                date = *parsed;
-            }
-            auto& slot = key == "measuredOn" ? electrode.measured_on : electrode.remeasured_on;
-            if (slot == date) return "unchanged";
-            slot = date;
-            return {};
-        }
-        const SurveyField* spec = survey_field(key);
-        if (!spec) return "no such field: " + key;
-        std::string error;
-        const auto value = read_field(*spec, text.toStdString(), error);
-        if (!error.empty()) return error;
-        std::optional<double>* slot = key == "ra"             ? &electrode.measured_ra_ohms
-                                      : key == "remeasuredRa" ? &electrode.remeasured_ra_ohms
-                                      : key == "resistivity"  ? &electrode.soil_resistivity_ohm_m
-                                                              : nullptr;
-        if (!slot) return "no such field: " + key;
-        if (*slot == value) return "unchanged";
-        *slot = value;
-        if (key == "remeasuredRa" && value && !electrode.remeasured_on) electrode.remeasured_on = workspace_->todayDate();
-        return {};
-    });
-    return result == QLatin1String("unchanged") ? QString() : result;
-}
-
-QString JobSession::addObservation(const QString& text, const QString& code) {
-    return applyEdit([&](model::Installation& installation) -> std::string {
-        model::Observation observation;
-        observation.text = text.trimmed().toStdString();
-        if (observation.text.empty()) return "observation: expected the inspector's words, got nothing";
-        const std::string code_text = code.trimmed().toLower().toStdString();
-        if (code_text == "c1") observation.code = model::ObservationCode::c1;
-        else if (code_text == "c2") observation.code = model::ObservationCode::c2;
-        else if (code_text == "c3") observation.code = model::ObservationCode::c3;
-        else if (code_text == "fi") observation.code = model::ObservationCode::fi;
-        else return "code: expected C1, C2, C3 or FI, got \"" + code.toStdString() + "\"";
-        int n = static_cast<int>(installation.observations.size()) + 1;
-        auto taken = [&](const std::string& id) {
-            for (const auto& o : installation.observations)
-                if (o.id == id) return true;
-            return false;
-        };
-        do observation.id = "o" + std::to_string(n++);
-        while (taken(observation.id));
-        installation.observations.push_back(std::move(observation));
-        return {};
-    });
-}
-
-QString JobSession::removeObservation(const QString& observation_id) {
-    return applyEdit([&](model::Installation& installation) -> std::string {
-        const auto before = installation.observations.size();
-        std::erase_if(installation.observations,
-                      [&](const model::Observation& o) { return o.id == observation_id.toStdString(); });
-        return before == installation.observations.size() ? "no observation " + observation_id.toStdString()
-                                                           : std::string();
-    });
-}
-
-void JobSession::undo() {
-    if (undo_.empty()) return;
-    const std::string previous = undo_.back();
-    const std::string current = document_;
-    if (QString refused = saveDocument(previous, false); !refused.isEmpty()) {
-        setErrorText(refused);
-        return;
-    }
-    undo_.pop_back();
-    redo_.push_back(current);
-    Q_EMIT changed();
-}
-
-void JobSession::redo() {
-    if (redo_.empty()) return;
-    const std::string next = redo_.back();
-    const std::string current = document_;
-    if (QString refused = saveDocument(next, false); !refused.isEmpty()) {
-        setErrorText(refused);
-        return;
-    }
-    redo_.pop_back();
-    undo_.push_back(current);
-    Q_EMIT changed();
-}
-
-QVariantMap JobSession::fieldSpec(const QString& field) {
-    const SurveyField* spec = survey_field(field.toStdString());
-    if (!spec) return {};
-    return {{QStringLiteral("label"), QString::fromUtf8(spec->label)},
-            {QStringLiteral("unit"), QString::fromUtf8(spec->unit)},
-            {QStringLiteral("range"), tr("%1 to %2 %3")
-                                          .arg(QString::fromStdString(reading_text(spec->min)),
-                                               QString::fromStdString(reading_text(spec->max)), QString::fromUtf8(spec->unit))}};
 }
 
 }  // namespace mendwright::desktop

@@ -2,7 +2,7 @@
 // One job open in the application: its survey (latest revision), the findings, the ranked
 // remedy options per finding, the three plans side by side, the works list of the plan in use,
 // the export of the quote, the urgent items after the works, and survey edits (each saved as a
-// new revision, with undo and redo). QML shows what this object has worked out and calls its
+// new revision, with undo and redo; job_session_survey.cpp, edits in survey_edits.hpp). QML shows what this object has worked out and calls its
 // invokables; it decides nothing itself.
 //
 //   JobSession { id: session; jobId: 42 }      // loads, assesses, proposes, plans
@@ -60,6 +60,10 @@ class JobSession : public QObject {
     Q_PROPERTY(mendwright::desktop::RecordListModel* circuits READ circuits CONSTANT)
     Q_PROPERTY(mendwright::desktop::RecordListModel* observations READ observations CONSTANT)
     Q_PROPERTY(QVariantMap electrode READ electrode NOTIFY changed)
+    Q_PROPERTY(QVariantMap supply READ supply NOTIFY changed)
+    Q_PROPERTY(QVariantMap tails READ tails NOTIFY changed)
+    Q_PROPERTY(mendwright::desktop::RecordListModel* boards READ boards CONSTANT)
+    Q_PROPERTY(mendwright::desktop::RecordListModel* devices READ devices CONSTANT)
     Q_PROPERTY(bool canUndo READ canUndo NOTIFY changed)
     Q_PROPERTY(bool canRedo READ canRedo NOTIFY changed)
 
@@ -95,6 +99,10 @@ public:
     [[nodiscard]] RecordListModel* circuits() const { return circuits_model_; }
     [[nodiscard]] RecordListModel* observations() const { return observations_model_; }
     [[nodiscard]] QVariantMap electrode() const { return electrode_info_; }
+    [[nodiscard]] QVariantMap supply() const { return supply_info_; }
+    [[nodiscard]] QVariantMap tails() const { return tails_info_; }
+    [[nodiscard]] RecordListModel* boards() const { return boards_model_; }
+    [[nodiscard]] RecordListModel* devices() const { return devices_model_; }
     [[nodiscard]] bool canUndo() const { return !undo_.empty(); }
     [[nodiscard]] bool canRedo() const { return !redo_.empty(); }
 
@@ -119,6 +127,22 @@ public:
     Q_INVOKABLE QString editCircuit(const QString& circuit_id, const QString& field, const QString& text);
     // field: "ra", "measuredOn", "remeasuredRa", "remeasuredOn", "resistivity"
     Q_INVOKABLE QString editElectrode(const QString& field, const QString& text);
+    // Any survey field (app/desktop/survey_edits.hpp lists targets and fields): "supply", "tails",
+    // "electrode", "board:<id>", "device:<id>", "circuit:<id>". The survey reader's checks run on
+    // the result; a refusal names the field's path.
+    Q_INVOKABLE QString editSurvey(const QString& target, const QString& field, const QString& text);
+    Q_INVOKABLE QString addElectrode();
+    Q_INVOKABLE QString removeElectrode();
+    // A board supplied by a new submain circuit of `parent_board_id`.
+    Q_INVOKABLE QString addBoard(const QString& parent_board_id);
+    Q_INVOKABLE QString removeBoard(const QString& board_id);
+    // kind: "main_switch", "rcd", "switch_fuse"; upstream_id "" = below the incoming supply.
+    Q_INVOKABLE QString addDevice(const QString& board_id, const QString& kind, const QString& upstream_id);
+    Q_INVOKABLE QString removeDevice(const QString& device_id);
+    Q_INVOKABLE QString addCircuit(const QString& board_id);
+    Q_INVOKABLE QString removeCircuit(const QString& circuit_id);
+    // [{value, text}] of a choice field ("earthing", "kind", "curve", "use", ...).
+    Q_INVOKABLE static QVariantList choices(const QString& field);
     Q_INVOKABLE QString addObservation(const QString& text, const QString& code);
     Q_INVOKABLE QString removeObservation(const QString& observation_id);
     Q_INVOKABLE void undo();
@@ -147,6 +171,8 @@ private:
     bool rebuildOwnPlan();
     bool reloadDetail();
     QString saveDocument(const std::string& document, bool record_undo);
+    // Runs `edit` on a copy; "" from it saves the copy as a new revision, "unchanged" saves
+    // nothing and is no refusal; anything else is the refusal.
     QString applyEdit(const std::function<std::string(model::Installation&)>& edit);
     void setErrorText(const QString& text);
     void followStatus();
@@ -172,6 +198,8 @@ private:
     QString last_export_;
     std::vector<std::string> undo_, redo_;
     QVariantMap electrode_info_;
+    QVariantMap supply_info_;
+    QVariantMap tails_info_;
 
     RecordListModel* findings_model_;
     RecordListModel* options_model_;
@@ -182,6 +210,8 @@ private:
     RecordListModel* urgent_model_;
     RecordListModel* circuits_model_;
     RecordListModel* observations_model_;
+    RecordListModel* boards_model_;
+    RecordListModel* devices_model_;
 };
 
 }  // namespace mendwright::desktop

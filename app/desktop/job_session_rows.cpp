@@ -1,5 +1,5 @@
 // The rows a job session hands to QML: findings, options, plans, the electrode chart, the works
-// list, urgent items and the survey's editable readings. Texts and fractions are worked out
+// list and urgent items (the survey's rows: job_session_survey.cpp). Texts and fractions are worked out
 // here so that QML only lays them out.
 #include <algorithm>
 #include <cmath>
@@ -8,6 +8,7 @@
 #include "app/desktop/job_session.hpp"
 #include "app/desktop/quote_assembly.hpp"
 #include "app/desktop/survey_fields.hpp"
+#include "app/desktop/survey_rows.hpp"
 #include "app/desktop/workspace.hpp"
 #include "planner/io/survey_document.hpp"
 #include "planner/model/navigation.hpp"
@@ -327,41 +328,6 @@ void JobSession::refreshUrgentRows() {
     urgent_model_->setRows(std::move(rows));
 }
 
-void JobSession::refreshSurveyRows() {
-    QList<QVariantMap> circuits, observations;
-    for (const auto& board : installation_->boards)
-        for (const auto& circuit : board.circuits) {
-            const auto& d = circuit.device;
-            circuits.push_back({{"circuitId", qtext(circuit.id)},
-                                {"board", qtext(board.name)},
-                                {"number", qtext(circuit.number)},
-                                {"description", qtext(circuit.description)},
-                                {"zs", qtext(reading_text(circuit.measured_zs_ohms))},
-                                {"r1r2", qtext(reading_text(circuit.r1_plus_r2_ohms))},
-                                {"ir", qtext(reading_text(circuit.insulation_resistance_megohms))},
-                                {"leakage", qtext(reading_text(circuit.standing_leakage_ma))},
-                                {"tripIdn", qtext(reading_text(circuit.rcd_trip_ms_at_idn))},
-                                {"trip5Idn", qtext(reading_text(circuit.rcd_trip_ms_at_5idn))},
-                                {"residualCurrent", d.residual_current_amps && model::is_residual_current_device(d)}});
-        }
-    for (const auto& observation : installation_->observations) {
-        QString location;
-        if (observation.circuit_id) location = qtext(*observation.circuit_id);
-        else if (observation.board_id) location = qtext(*observation.board_id);
-        QString code = observation.code == model::ObservationCode::c1   ? QStringLiteral("C1")
-                       : observation.code == model::ObservationCode::c2 ? QStringLiteral("C2")
-                       : observation.code == model::ObservationCode::c3 ? QStringLiteral("C3")
-                                                                        : QStringLiteral("FI");
-        observations.push_back({{"observationId", qtext(observation.id)},
-                                {"code", code},
-                                {"text", qtext(observation.text)},
-                                {"location", location},
-                                {"itemCode", qtext(observation.item_code.value_or(""))}});
-    }
-    circuits_model_->setRows(std::move(circuits));
-    observations_model_->setRows(std::move(observations));
-}
-
 // The RA the plan of the last quote predicted (or, before any quote, the plan in use): that
 // plan worked out again on the survey revision the quote priced, so the figure does not move
 // when the re-measured value is entered.
@@ -419,6 +385,7 @@ QVariantMap JobSession::computeElectrodeInfo() const {
     map.insert("remeasuredOn", e.remeasured_on ? qtext(e.remeasured_on->to_iso()) : QString());
     map.insert("resistivity", qtext(reading_text(e.soil_resistivity_ohm_m)));
     map.insert("rods", e.count);
+    map.insert(electrode_construction_row(e));
     const auto predicted = predictedElectrodeOhms();
     map.insert("predicted", predicted ? qtext(rules::number_text(*predicted, 1)) : QString());
     QString comparison;

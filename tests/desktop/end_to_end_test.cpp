@@ -2,7 +2,8 @@
 // workspace code) on a temporary store seeded with the demo jobs. A user opens the first job,
 // compares the plans, takes the least-cost one and exports the quote; every key press counts as
 // one user action and the whole path must take at most 12. The workbook is then read back by an
-// independent reader (openpyxl).
+// independent reader (openpyxl). Then, after the works, the first urgent item is marked
+// remedied (R) and re-tested (T) on the After-the-works view, by keyboard only.
 #include <QFile>
 #include <QProcess>
 #include <QQmlApplicationEngine>
@@ -76,8 +77,21 @@ private Q_SLOTS:
         QVERIFY(reader.waitForFinished(60000));
         QVERIFY2(reader.exitCode() == 0, reader.readAllStandardError().constData());
 
-        // Marking the items done after the works is covered through the session in
-        // desktop.exporting_records_the_quote_and_the_items_then_follow_to_completion.
+        // After the works, by keyboard: the first urgent item marked remedied with R, then
+        // re-tested with T (the list has the focus when the view opens).
+        act(Qt::Key_6, Qt::ControlModifier);      // the After-the-works view
+        QCOMPARE(window_->property("currentView").toString(), QStringLiteral("aftercare"));
+        const QString item = session->urgentItems()->get(0).value("findingId").toString();
+        QCOMPARE(session->urgentItems()->get(0).value("state").toString(), QStringLiteral("open"));
+        act(Qt::Key_R);
+        QTRY_COMPARE(session->urgentItems()->get(session->urgentItems()->indexOf(QStringLiteral("findingId"), item))
+                         .value("state").toString(),
+                     QStringLiteral("remedied"));
+        QCOMPARE(session->status(), QStringLiteral("in_progress"));
+        act(Qt::Key_T);
+        QTRY_COMPARE(session->urgentItems()->get(session->urgentItems()->indexOf(QStringLiteral("findingId"), item))
+                         .value("state").toString(),
+                     QStringLiteral("retested"));
     }
 };
 

@@ -1,0 +1,272 @@
+// Tests of the survey editor of the desktop application (app/desktop/survey_edits.*,
+// survey_rows.*, job_session_survey.cpp): supply, tails, electrode, boards with their device
+// trees and circuits entered or corrected through JobSession, each accepted edit a revision,
+// refusals naming the field with its unit and range (or the survey reader's path), and the
+// findings following the edits. Surveys: the invented ones of tests/desktop/data.
+#include <QAbstractItemModelTester>
+#include <QTest>
+
+#include "app/desktop/job_list_model.hpp"
+#include "app/desktop/job_session.hpp"
+#include "app/desktop/record_list_model.hpp"
+#include "test_workspace.hpp"
+
+using namespace mendwright;
+using namespace mendwright::desktop;
+
+namespace {
+
+bool open_job(JobSession& session, const QString& reference) {
+    JobListModel jobs;
+    jobs.fetchMore({});
+    for (int row = 0; row < jobs.count(); ++row)
+        if (jobs.data(jobs.index(row), JobListModel::ReferenceRole).toString() == reference) {
+            session.setJobId(jobs.jobIdAt(row));
+            return session.loaded();
+        }
+    return false;
+}
+
+// Whether the session has a finding of the rule `rule_prefix` about circuit `circuit_id`.
+bool has_finding(const JobSession& session, const QString& rule_prefix, const QString& circuit_id) {
+    const RecordListModel& findings = *session.findings();
+    for (int row = 0; row < findings.count(); ++row) {
+        const QString id = findings.get(row).value("findingId").toString();
+        if (id.startsWith(rule_prefix) && id.endsWith(QStringLiteral("circuit:") + circuit_id)) return true;
+    }
+    return false;
+}
+
+QString clause_of(const JobSession& session, const QString& rule_prefix, const QString& circuit_id) {
+    const RecordListModel& findings = *session.findings();
+    for (int row = 0; row < findings.count(); ++row) {
+        const QVariantMap finding = findings.get(row);
+        const QString id = finding.value("findingId").toString();
+        if (id.startsWith(rule_prefix) && id.endsWith(QStringLiteral("circuit:") + circuit_id))
+            return finding.value("clause").toString();
+    }
+    return {};
+}
+
+// The board's devices (rows of JobSession.devices), in tree order.
+QList<QVariantMap> devices_of(const JobSession& session, const QString& board_id) {
+    QList<QVariantMap> rows;
+    for (const auto& row : session.devices()->rows())
+        if (row.value("boardId").toString() == board_id) rows.push_back(row);
+    return rows;
+}
+
+// The id of the board's device of `kind`, the (skip+1)th in tree order.
+QString device_id_of_kind(const JobSession& session, const QString& board_id, const QString& kind, int skip = 0) {
+    for (const auto& device : devices_of(session, board_id))
+        if (device.value("kind").toString() == kind && skip-- == 0) return device.value("deviceId").toString();
+    return {};
+}
+
+}  // namespace
+
+class SurveyEditorTests : public QObject {
+    Q_OBJECT
+
+private Q_SLOTS:
+    void supply_tails_and_electrode_construction_are_edited_as_revisions() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        JobSession session;
+        QVERIFY(open_job(session, QStringLiteral("DT-101")));
+        const int first = session.revision();
+        QCOMPARE(session.editSurvey("supply", "earthing", "tn_c_s"), QString());
+        QCOMPARE(session.supply().value("earthing").toString(), QStringLiteral("tn_c_s"));
+        QCOMPARE(session.editSurvey("supply", "ze", "0.35"), QString());
+        QCOMPARE(session.supply().value("ze").toString(), QStringLiteral("0.35"));
+        QCOMPARE(session.editSurvey("supply", "pfc", ""), QString());  // not recorded
+        QCOMPARE(session.supply().value("pfc").toString(), QString());
+        QCOMPARE(session.editSurvey("tails", "tailsLength", "4.5"), QString());
+        QCOMPARE(session.editSurvey("tails", "tailsRoute", "buried"), QString());
+        QCOMPARE(session.editSurvey("tails", "tailsProtected", "true"), QString());
+        QCOMPARE(session.tails().value("tailsLength").toString(), QStringLiteral("4.5"));
+        QCOMPARE(session.tails().value("tailsRoute").toString(), QStringLiteral("buried"));
+        QCOMPARE(session.tails().value("tailsProtected").toBool(), true);
+        // More rods than one: the layout follows (a single layout of 2 rods does not read).
+        QCOMPARE(session.editSurvey("electrode", "rods", "2"), QString());
+        QCOMPARE(session.electrode().value("rodCount").toString(), QStringLiteral("2"));
+        QCOMPARE(session.electrode().value("layout").toString(), QStringLiteral("line"));
+        // Rod diameter typed in mm, stored in metres (docs/survey-format.md: a 16 mm rod is 0.016).
+        QCOMPARE(session.electrode().value("rodDiameter").toString(), QStringLiteral("16"));  // 0.016 m in the file
+        QCOMPARE(session.editSurvey("electrode", "rodDiameter", "20"), QString());
+        QCOMPARE(session.electrode().value("rodDiameter").toString(), QStringLiteral("20"));
+        QCOMPARE(session.revision(), first + 8);
+        // Setting what is already there saves nothing.
+        QCOMPARE(session.editSurvey("supply", "earthing", "tn_c_s"), QString());
+        QCOMPARE(session.revision(), first + 8);
+    }
+
+    void a_refused_edit_names_the_field_unit_and_range_or_the_reader_path_and_saves_nothing() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        JobSession session;
+        QVERIFY(open_job(session, QStringLiteral("DT-101")));
+        const int first = session.revision();
+        // IΔn is typed in mA: 0.03 would be a slip of the unit (docs/survey-format.md, IΔn in amperes).
+        QCOMPARE(session.editSurvey("device:rcd1", "idn", "0.03"), QStringLiteral("IΔn: expected 1 to 3000 mA, got 0.03"));
+        QCOMPARE(session.editSurvey("device:rcd1", "idn", ""), QStringLiteral("IΔn: a value is required (1 to 3000 mA)"));
+        QCOMPARE(session.editSurvey("tails", "tailsLength", "1000"),
+                 QStringLiteral("Meter tails length: expected 0.1 to 100 m, got 1000"));
+        QCOMPARE(session.editSurvey("supply", "u0", "230V"),
+                 QStringLiteral("U0: expected a number in V (50 to 1000 V), got \"230V\""));
+        QCOMPARE(session.editSurvey("supply", "u0", ""), QStringLiteral("U0: a value is required (50 to 1000 V)"));
+        QCOMPARE(session.editSurvey("electrode", "rods", "2.5"),
+                 QStringLiteral("Rods: expected a whole number (1 to 100), got 2.5"));
+        QVERIFY(session.editSurvey("supply", "earthing", "TN-S").contains(QStringLiteral("\"tt\", \"tn_s\" or \"tn_c_s\"")));
+        // The survey reader's checks run on the whole document: a device placed under one that
+        // does not exist is refused at its path.
+        const QString refused = session.editSurvey("device:rcd1", "upstream", "nowhere");
+        QVERIFY2(refused.contains(QStringLiteral("boards[0].devices[1].upstream_id")), qPrintable(refused));
+        // An MCB needs its curve (docs/survey-format.md, what each kind of device must carry).
+        const QString no_curve = session.editSurvey("circuit:c1", "curve", "");
+        QVERIFY2(no_curve.contains(QStringLiteral("boards[0].circuits[0].device.curve")), qPrintable(no_curve));
+        QCOMPARE(session.revision(), first);
+        QVERIFY(!session.canUndo());
+    }
+
+    void boards_devices_and_circuits_are_added_edited_and_removed() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        JobSession session;
+        QVERIFY(open_job(session, QStringLiteral("DT-102")));
+        RecordListModel* boards = session.boards();
+        QAbstractItemModelTester boards_tester(boards, QAbstractItemModelTester::FailureReportingMode::QtTest);
+        QAbstractItemModelTester devices_tester(session.devices(), QAbstractItemModelTester::FailureReportingMode::QtTest);
+        QAbstractItemModelTester circuits_tester(session.circuits(), QAbstractItemModelTester::FailureReportingMode::QtTest);
+        QCOMPARE(boards->count(), 1);
+        QCOMPARE(session.circuits()->count(), 2);
+
+        // A board supplied from the consumer unit by a new submain.
+        QCOMPARE(session.addBoard("cu"), QString());
+        QCOMPARE(boards->count(), 2);
+        QCOMPARE(session.circuits()->count(), 3);
+        const QString board = boards->get(1).value("boardId").toString();
+        QVERIFY(boards->get(1).value("supplied").toString().startsWith(QStringLiteral("Supplied by circuit")));
+        QCOMPARE(session.editSurvey("board:" + board, "name", "Garage board"), QString());
+        QCOMPARE(session.editSurvey("board:" + board, "location", "Garage wall"), QString());
+        QCOMPARE(session.editSurvey("board:" + board, "enclosure", "combustible"), QString());
+        QCOMPARE(boards->get(1).value("name").toString(), QStringLiteral("Garage board"));
+
+        // Its device tree: a main switch, a time-delayed 100 mA RCD below it.
+        QCOMPARE(session.addDevice(board, "main_switch", ""), QString());
+        const QString main_switch = device_id_of_kind(session, board, "main_switch");
+        QCOMPARE(session.addDevice(board, "rcd", main_switch), QString());
+        const QString rcd = device_id_of_kind(session, board, "rcd");
+        QCOMPARE(session.editSurvey("device:" + rcd, "idn", "100"), QString());
+        QCOMPARE(session.editSurvey("device:" + rcd, "delay", "time_delayed"), QString());
+        QCOMPARE(session.editSurvey("device:" + rcd, "rcdType", "a"), QString());
+        const QList<QVariantMap> devices = devices_of(session, board);
+        QCOMPARE(devices.size(), 2);
+        QCOMPARE(devices[1].value("depth").toInt(), 1);  // below the main switch
+        QCOMPARE(devices[1].value("summary").toString(), QStringLiteral("RCD 63 A, 100 mA, type A, S-type"));
+
+        // A circuit in it, hung below the RCD, turned into a 20 A type C RCBO.
+        QCOMPARE(session.addCircuit(board), QString());
+        QCOMPARE(session.circuits()->count(), 4);
+        QVariantMap circuit = session.circuits()->get(3);
+        const QString circuit_id = circuit.value("circuitId").toString();
+        QCOMPARE(circuit.value("upstream").toString(), rcd);
+        QCOMPARE(session.editSurvey("circuit:" + circuit_id, "kind", "rcbo"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit_id, "curve", "c"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit_id, "rating", "20"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit_id, "description", "Workshop sockets"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit_id, "use", "sockets"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit_id, "lineCsa", "4"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit_id, "length", "25"), QString());
+        circuit = session.circuits()->get(3);
+        QCOMPARE(circuit.value("summary").toString(), QStringLiteral("RCBO type C 20 A, 30 mA"));  // 30 mA filled in
+        QCOMPARE(circuit.value("lineCsa").toString(), QStringLiteral("4"));
+        QCOMPARE(circuit.value("length").toString(), QStringLiteral("25"));
+
+        // Removing the main switch moves the RCD up to the incoming supply.
+        QCOMPARE(session.removeDevice(main_switch), QString());
+        QCOMPARE(devices_of(session, board).size(), 1);
+        QCOMPARE(devices_of(session, board)[0].value("upstream").toString(), QString());
+        QCOMPARE(session.removeCircuit(circuit_id), QString());
+        QCOMPARE(session.circuits()->count(), 3);
+        // The origin board stays; the new board goes with its submain.
+        QVERIFY(session.removeBoard("cu").contains(QStringLiteral("origin board")));
+        QCOMPARE(session.removeBoard(board), QString());
+        QCOMPARE(boards->count(), 1);
+        QCOMPARE(session.circuits()->count(), 2);
+    }
+
+    void undo_and_redo_step_through_structural_edits() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        JobSession session;
+        QVERIFY(open_job(session, QStringLiteral("DT-102")));
+        const int first = session.revision();
+        QCOMPARE(session.addBoard("cu"), QString());
+        QCOMPARE(session.editSurvey("supply", "earthing", "tn_s"), QString());
+        QCOMPARE(session.revision(), first + 2);
+        session.undo();
+        QCOMPARE(session.supply().value("earthing").toString(), QStringLiteral("tn_c_s"));
+        session.undo();
+        QCOMPARE(session.boards()->count(), 1);
+        QVERIFY(!session.canUndo());
+        session.redo();
+        QCOMPARE(session.boards()->count(), 2);
+        session.redo();
+        QCOMPARE(session.supply().value("earthing").toString(), QStringLiteral("tn_s"));
+        QCOMPARE(session.revision(), first + 6);  // every step, undo and redo included, is a revision
+        QVERIFY(!session.canRedo());
+    }
+
+    void a_30ma_rcd_above_a_socket_circuit_clears_the_additional_protection_finding() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        JobSession session;
+        QVERIFY(open_job(session, QStringLiteral("DT-101")));
+        QCOMPARE(session.addCircuit("cu"), QString());
+        const QString circuit = session.circuits()->get(session.circuits()->count() - 1).value("circuitId").toString();
+        QCOMPARE(session.editSurvey("circuit:" + circuit, "use", "sockets"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit, "upstream", "ms"), QString());
+        // Socket-outlets up to 32 A need 30 mA additional protection: BS 7671:2018+A2 411.3.3
+        // (the rules profile codes it C3 for an existing installation).
+        QVERIFY(has_finding(session, "additional_protection", circuit));
+        QCOMPARE(clause_of(session, "additional_protection", circuit), QStringLiteral("BS 7671:2018+A2 411.3.3"));
+        QCOMPARE(session.addDevice("cu", "rcd", "ms"), QString());
+        const QString rcd = device_id_of_kind(session, "cu", "rcd", 1);
+        QVERIFY(!rcd.isEmpty());
+        QCOMPARE(session.editSurvey("circuit:" + circuit, "upstream", rcd), QString());
+        QVERIFY(!has_finding(session, "additional_protection", circuit));
+        // A 100 mA RCD is no additional protection (411.3.3 asks for IΔn not over 30 mA).
+        QCOMPARE(session.editSurvey("device:" + rcd, "idn", "100"), QString());
+        QVERIFY(has_finding(session, "additional_protection", circuit));
+    }
+
+    void a_new_job_is_built_up_from_its_empty_survey() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        const qint64 id = fixture.workspace->createJob("NJ-1", "Invented client", "1 Invented Row");
+        QVERIFY(id >= 0);
+        JobSession session;
+        session.setJobId(id);
+        QVERIFY(session.loaded());
+        QCOMPARE(session.circuits()->count(), 0);
+        QCOMPARE(session.hasElectrode(), false);
+        QCOMPARE(session.addElectrode(), QString());
+        QCOMPARE(session.editSurvey("electrode", "ra", "45"), QString());
+        QCOMPARE(session.editSurvey("electrode", "measuredOn", "2026-11-20"), QString());
+        QCOMPARE(session.addDevice("cu", "rcd", "ms"), QString());
+        QCOMPARE(session.addCircuit("cu"), QString());
+        const QString circuit = session.circuits()->get(0).value("circuitId").toString();
+        QCOMPARE(session.circuits()->get(0).value("upstream").toString(),
+                 device_id_of_kind(session, "cu", "rcd"));
+        QCOMPARE(session.editSurvey("circuit:" + circuit, "use", "sockets"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit, "rating", "32"), QString());
+        QCOMPARE(session.editSurvey("circuit:" + circuit, "zs", "46.1"), QString());
+        QCOMPARE(session.revision(), 9);
+        QVERIFY(session.errorText().isEmpty());
+        QVERIFY(!has_finding(session, "additional_protection", circuit));
+    }
+};
+
+QTEST_GUILESS_MAIN(SurveyEditorTests)
+#include "survey_editor_tests.moc"
