@@ -15,6 +15,14 @@ ColumnLayout {
     property alias box: combo
     spacing: 2
 
+    // The row of `value` among `choices` (-1 when absent), from the two properties alone so that
+    // it holds whichever of them arrives first.
+    function indexOf(value) {
+        for (let i = 0; i < root.choices.length; ++i)
+            if (root.choices[i].value === value) return i
+        return -1
+    }
+
     Text {
         text: root.label
         Layout.fillWidth: true
@@ -31,7 +39,7 @@ ColumnLayout {
         model: root.choices
         textRole: "text"
         valueRole: "value"
-        currentIndex: indexOfValue(root.value)
+        currentIndex: root.indexOf(root.value)
         font.family: Theme.family
         font.pixelSize: Theme.textSize
         focusPolicy: Qt.StrongFocus
@@ -39,7 +47,7 @@ ColumnLayout {
         onActivated: {
             if (currentValue === root.value) return
             root.error = root.commit(currentValue)
-            currentIndex = Qt.binding(() => indexOfValue(root.value))
+            currentIndex = Qt.binding(() => root.indexOf(root.value))
         }
     }
     Text {

@@ -23,7 +23,7 @@ Rectangle {
         RowLayout {
             Layout.fillWidth: true
             BodyText {
-                text: root.session.hasElectrode ? qsTr("Earth electrode (%1 rods)").arg(root.electrode.rods || 0)
+                text: root.session.hasElectrode ? qsTr("Earth electrode, rods in the system: %1").arg(root.electrode.rods || 0)
                                                 : qsTr("Earth electrode: none recorded")
                 font.bold: true
                 Layout.fillWidth: true
@@ -53,7 +53,7 @@ Rectangle {
                 commit: (value) => root.session.editSurvey("electrode", "layout", value)
             }
             SurveyNumberEditor { width: 120; session: root.session; target: "electrode"; key: "rodLength"; label: qsTr("Rod length"); value: root.electrode.rodLength || "" }
-            SurveyNumberEditor { width: 130; session: root.session; target: "electrode"; key: "rodDiameter"; label: qsTr("Rod diameter"); value: root.electrode.rodDiameter || "" }
+            SurveyNumberEditor { width: 150; session: root.session; target: "electrode"; key: "rodDiameter"; label: qsTr("Rod diameter"); value: root.electrode.rodDiameter || "" }
             SurveyNumberEditor { width: 130; session: root.session; target: "electrode"; key: "spacing"; label: qsTr("Rod spacing"); value: root.electrode.spacing || "" }
             SurveyTextEditor { width: 220; session: root.session; target: "electrode"; key: "soil"; label: qsTr("Soil"); value: root.electrode.soil || "" }
         }

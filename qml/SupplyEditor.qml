@@ -44,8 +44,8 @@ Rectangle {
             }
             SurveyTextEditor { width: 140; session: root.session; target: "supply"; key: "supplyFuseType"; label: qsTr("Supply fuse type"); value: root.supply.supplyFuseType || "" }
             SurveyNumberEditor { width: 150; session: root.session; target: "supply"; key: "supplyFuse"; label: qsTr("Supply fuse rating"); value: root.supply.supplyFuse || "" }
-            SurveyNumberEditor { width: 170; session: root.session; target: "supply"; key: "pfc"; label: qsTr("Prospective fault current"); value: root.supply.pfc || "" }
-            SurveyNumberEditor { width: 120; session: root.session; target: "supply"; key: "ze"; label: qsTr("Ze"); value: root.supply.ze || "" }
+            SurveyNumberEditor { width: 210; session: root.session; target: "supply"; key: "pfc"; label: qsTr("Prospective fault current"); value: root.supply.pfc || "" }
+            SurveyNumberEditor { width: 170; session: root.session; target: "supply"; key: "ze"; label: qsTr("Ze"); value: root.supply.ze || "" }
         }
 
         BodyText { text: qsTr("Meter tails"); font.bold: true }

@@ -100,6 +100,11 @@ Item {
             tryCompare(circuits, "count", 1)
             compare(circuits.itemAt(0).kind, "circuit_breaker")
             compare(circuits.itemAt(0).curve, "b")
+            // A drop-down made with its value already set shows it (it once showed nothing when
+            // the value came before the choices).
+            const curve = find(circuits.itemAt(0), (i) => i.label === "Curve" && i.box !== undefined)
+            verify(curve)
+            compare(curve.box.currentText, "Type B")
         }
 
         function test_4_an_rcd_idn_is_typed_in_milliamperes() {
