@@ -38,6 +38,27 @@ FocusScope {
                 Layout.fillWidth: true
             }
 
+            // The survey reader's warnings: possible values worth a second look.
+            Rectangle {
+                visible: root.session.surveyWarnings.length > 0
+                Layout.fillWidth: true
+                color: Theme.warningSoft
+                border.color: Theme.warning
+                radius: Theme.radius
+                implicitHeight: warningList.implicitHeight + Theme.step * 2
+                Column {
+                    id: warningList
+                    anchors.left: parent.left; anchors.right: parent.right; anchors.top: parent.top
+                    anchors.margins: Theme.step
+                    spacing: 2
+                    BodyText { text: qsTr("To check (the survey is saved; these values are possible but unusual):"); font.bold: true; width: parent.width }
+                    Repeater {
+                        model: root.session.surveyWarnings
+                        delegate: BodyText { required property string modelData; text: "• " + modelData; width: warningList.width }
+                    }
+                }
+            }
+
             SupplyEditor { Layout.fillWidth: true; session: root.session }
             ElectrodeEditor { Layout.fillWidth: true; session: root.session }
 

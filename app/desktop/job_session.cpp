@@ -122,6 +122,8 @@ void JobSession::load() {
         return;
     }
     installation_ = std::make_unique<model::Installation>(*survey.installation);
+    survey_warnings_.clear();
+    for (const auto& warning : survey.warnings()) survey_warnings_ << qtext(warning.to_string());
     setErrorText({});
     recompute();
 }

@@ -11,6 +11,7 @@
 #include <QObject>
 #include <functional>
 #include <QString>
+#include <QStringList>
 #include <QtQml/qqmlregistration.h>
 #include <memory>
 #include <optional>
@@ -61,6 +62,9 @@ class JobSession : public QObject {
     Q_PROPERTY(mendwright::desktop::RecordListModel* observations READ observations CONSTANT)
     Q_PROPERTY(QVariantMap electrode READ electrode NOTIFY changed)
     Q_PROPERTY(QVariantMap supply READ supply NOTIFY changed)
+    // The survey reader's warnings on the saved survey ("path: what to check"): possible values
+    // worth a second look; they never stop an edit.
+    Q_PROPERTY(QStringList surveyWarnings READ surveyWarnings NOTIFY changed)
     Q_PROPERTY(QVariantMap tails READ tails NOTIFY changed)
     Q_PROPERTY(mendwright::desktop::RecordListModel* boards READ boards CONSTANT)
     Q_PROPERTY(mendwright::desktop::RecordListModel* devices READ devices CONSTANT)
@@ -100,6 +104,7 @@ public:
     [[nodiscard]] RecordListModel* observations() const { return observations_model_; }
     [[nodiscard]] QVariantMap electrode() const { return electrode_info_; }
     [[nodiscard]] QVariantMap supply() const { return supply_info_; }
+    [[nodiscard]] QStringList surveyWarnings() const { return survey_warnings_; }
     [[nodiscard]] QVariantMap tails() const { return tails_info_; }
     [[nodiscard]] RecordListModel* boards() const { return boards_model_; }
     [[nodiscard]] RecordListModel* devices() const { return devices_model_; }
@@ -199,6 +204,7 @@ private:
     std::vector<std::string> undo_, redo_;
     QVariantMap electrode_info_;
     QVariantMap supply_info_;
+    QStringList survey_warnings_;
     QVariantMap tails_info_;
 
     RecordListModel* findings_model_;
