@@ -78,7 +78,8 @@ Rectangle {
         Repeater {
             model: root.session.devices
             delegate: DeviceEditor {
-                visible: boardId === root.boardId
+                id: deviceRow
+                visible: deviceRow.boardId === root.boardId
                 Layout.fillWidth: true
                 session: root.session
             }
