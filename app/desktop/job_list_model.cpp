@@ -1,5 +1,8 @@
 #include "app/desktop/job_list_model.hpp"
 
+#include <algorithm>
+#include <limits>
+
 #include "app/desktop/workspace.hpp"
 
 namespace mendwright::desktop {
@@ -10,11 +13,26 @@ JobListModel::JobListModel(QObject* parent) : QAbstractListModel(parent) {
     reload();
 }
 
+int JobListModel::count() const {
+    return static_cast<int>(std::min<long long>(pages_.total(), std::numeric_limits<int>::max()));
+}
+
 int JobListModel::rowCount(const QModelIndex& parent) const { return parent.isValid() ? 0 : count(); }
+
+const store::JobSummary* JobListModel::line(int row) const {
+    Workspace* workspace = Workspace::instance();
+    if (!workspace) return nullptr;
+    const store::JobSummary* found = pages_.line(workspace->store(), row);
+    if (!found && pages_.error()) workspace->setErrorText(QString::fromStdString(pages_.error()->to_string()));
+    return found;
+}
 
 QVariant JobListModel::data(const QModelIndex& index, int role) const {
     if (!checkIndex(index, CheckIndexOption::IndexIsValid | CheckIndexOption::ParentIsInvalid)) return {};
-    const store::JobSummary& job = rows_.at(static_cast<std::size_t>(index.row()));
+    if (role != Qt::DisplayRole && (role < JobIdRole || role > OverdueRole)) return {};
+    const store::JobSummary* found = line(index.row());
+    if (!found) return {};
+    const store::JobSummary& job = *found;
     switch (role) {
     case Qt::DisplayRole:
     case ReferenceRole: return QString::fromStdString(job.reference);
@@ -36,51 +54,14 @@ QHash<int, QByteArray> JobListModel::roleNames() const {
             {UrgentOpenRole, "urgentOpen"}, {NextDueRole, "nextDue"}, {OverdueRole, "overdue"}};
 }
 
-bool JobListModel::canFetchMore(const QModelIndex& parent) const {
-    return !parent.isValid() && loaded_ && !resetting_ && static_cast<qint64>(rows_.size()) < total_;
-}
-
-void JobListModel::fetchMore(const QModelIndex& parent) {
-    Workspace* workspace = Workspace::instance();
-    if (parent.isValid() || !workspace || resetting_) return;
-    auto page = job_page(workspace->store().connection(), query_, workspace->todayDate(),
-                         static_cast<long long>(rows_.size()), page_size_);
-    if (!page) {
-        workspace->setErrorText(QString::fromStdString(page.error().to_string()));
-        total_ = static_cast<qint64>(rows_.size());  // stop asking
-        Q_EMIT totalCountChanged();
-        return;
-    }
-    if (page->empty()) {
-        total_ = static_cast<qint64>(rows_.size());
-        Q_EMIT totalCountChanged();
-        return;
-    }
-    const int first = count();
-    beginInsertRows({}, first, first + static_cast<int>(page->size()) - 1);
-    for (auto& row : *page) rows_.push_back(std::move(row));
-    endInsertRows();
-    Q_EMIT countChanged();
-}
-
 void JobListModel::reload() {
     Workspace* workspace = Workspace::instance();
     beginResetModel();
-    rows_.clear();
-    total_ = 0;
-    loaded_ = false;
     if (workspace) {
-        auto total = count_jobs(workspace->store().connection(), query_, workspace->todayDate());
-        if (total) {
-            total_ = *total;
-            loaded_ = true;
-        } else {
+        if (auto total = pages_.reset(workspace->store(), query_); !total)
             workspace->setErrorText(QString::fromStdString(total.error().to_string()));
-        }
     }
-    resetting_ = true;
     endResetModel();
-    resetting_ = false;
     Q_EMIT totalCountChanged();
     Q_EMIT countChanged();
 }
@@ -121,8 +102,10 @@ void JobListModel::setSearch(const QString& text) {
 }
 
 void JobListModel::setPageSize(int size) {
-    if (size < 1 || size == page_size_) return;
-    page_size_ = size;
+    if (size < 1 || size == pages_.page_lines()) return;
+    beginResetModel();  // the rows stay, but views must ask for them again
+    pages_.set_page_lines(size);
+    endResetModel();
     Q_EMIT pageSizeChanged();
 }
 
@@ -139,7 +122,8 @@ QString JobListModel::statusLabel(const QString& status) {
 
 qint64 JobListModel::jobIdAt(int row) const {
     if (row < 0 || row >= count()) return -1;
-    return rows_.at(static_cast<std::size_t>(row)).id;
+    const store::JobSummary* found = line(row);
+    return found ? found->id : -1;
 }
 
 }  // namespace mendwright::desktop

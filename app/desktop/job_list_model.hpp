@@ -1,11 +1,12 @@
 #pragma once
 // The jobs list: every job with client, site, status, open urgent items and the next due date,
-// overdue first; filtered (urgent only, overdue, status) and searched. Rows arrive a page at a
-// time (canFetchMore/fetchMore), so a store of 100,000 jobs shows its first rows at once.
+// overdue first; filtered (urgent only, overdue, status) and searched. The model has a row for
+// every matching job (one count), but reads a row's page only when a view asks for the row, and
+// keeps a few pages (JobPages): a store of 100,000 jobs shows its first rows at once and scrolls
+// to its last without reading the ones between.
 
 #include <QAbstractListModel>
 #include <QtQml/qqmlregistration.h>
-#include <vector>
 
 #include "app/desktop/job_pages.hpp"
 
@@ -18,9 +19,10 @@ class JobListModel : public QAbstractListModel {
     Q_PROPERTY(bool overdueOnly READ overdueOnly WRITE setOverdueOnly NOTIFY filterChanged)
     Q_PROPERTY(QString status READ status WRITE setStatus NOTIFY filterChanged)  // "" = every status
     Q_PROPERTY(QString search READ search WRITE setSearch NOTIFY filterChanged)
-    Q_PROPERTY(qint64 totalCount READ totalCount NOTIFY totalCountChanged)  // matching jobs, loaded or not
-    Q_PROPERTY(int count READ count NOTIFY countChanged)                    // rows loaded
+    Q_PROPERTY(qint64 totalCount READ totalCount NOTIFY totalCountChanged)  // matching jobs
+    Q_PROPERTY(int count READ count NOTIFY countChanged)                    // rows (totalCount, up to INT_MAX)
     Q_PROPERTY(int pageSize READ pageSize WRITE setPageSize NOTIFY pageSizeChanged)
+    Q_PROPERTY(qint64 linesRead READ linesRead)                             // read from the store since the last reload
     Q_PROPERTY(QStringList statuses READ statuses CONSTANT)
 
 public:
@@ -34,8 +36,6 @@ public:
     [[nodiscard]] int rowCount(const QModelIndex& parent = {}) const override;
     [[nodiscard]] QVariant data(const QModelIndex& index, int role) const override;
     [[nodiscard]] QHash<int, QByteArray> roleNames() const override;
-    [[nodiscard]] bool canFetchMore(const QModelIndex& parent) const override;
-    void fetchMore(const QModelIndex& parent) override;
 
     [[nodiscard]] bool urgentOnly() const { return query_.urgent_only; }
     void setUrgentOnly(bool on);
@@ -45,10 +45,12 @@ public:
     void setStatus(const QString& status);
     [[nodiscard]] QString search() const { return QString::fromStdString(query_.search); }
     void setSearch(const QString& text);
-    [[nodiscard]] qint64 totalCount() const { return total_; }
-    [[nodiscard]] int count() const { return static_cast<int>(rows_.size()); }
-    [[nodiscard]] int pageSize() const { return page_size_; }
+    [[nodiscard]] qint64 totalCount() const { return pages_.total(); }
+    [[nodiscard]] int count() const;
+    [[nodiscard]] int pageSize() const { return pages_.page_lines(); }
     void setPageSize(int size);
+    [[nodiscard]] qint64 linesRead() const { return pages_.lines_read(); }
+    [[nodiscard]] qint64 linesKept() const { return pages_.lines_kept(); }
     [[nodiscard]] static QStringList statuses();
     // Readable words of a status: "in_progress" -> "in progress".
     Q_INVOKABLE static QString statusLabel(const QString& status);
@@ -63,12 +65,11 @@ Q_SIGNALS:
     void pageSizeChanged();
 
 private:
-    JobQuery query_;
-    std::vector<store::JobSummary> rows_;
-    qint64 total_ = 0;
-    int page_size_ = 100;
-    bool loaded_ = false;
-    bool resetting_ = false;  // while the reset is announced: fetchMore waits for the view's next pass
+    // The line of `row`, read if need be; nullptr (and the workspace's error text) if it cannot be.
+    const store::JobSummary* line(int row) const;
+
+    store::JobQuery query_;
+    mutable JobPages pages_;  // reading a row's page is not a change of the model
 };
 
 }  // namespace mendwright::desktop

@@ -1,79 +1,66 @@
 #include "app/desktop/job_pages.hpp"
 
-#include <QString>
+#include <algorithm>
 
 namespace mendwright::desktop {
 
-namespace {
+JobPages::JobPages(int page_lines, int pages_kept)
+    : page_lines_(std::max(1, page_lines)), pages_kept_(std::max(1, pages_kept)) {}
 
-// Open urgent items reported by the latest assessment, per job (as JobStore::list_jobs counts them).
-const char* const open_items_by_job =
-    "SELECT job_id, COUNT(*) AS urgent_open, MIN(due) AS next_due FROM urgent_items"
-    " WHERE state = 'open' AND absent_since_revision IS NULL GROUP BY job_id";
-
-struct Sql {
-    QString text;
-    std::vector<QVariant> values;
-};
-
-Sql filtered(const QString& columns, const JobQuery& query, const Date& today) {
-    const bool inner = query.urgent_only || query.overdue_only;
-    Sql sql{QStringLiteral("SELECT %1 FROM jobs j %2 JOIN (%3) u ON u.job_id = j.id")
-                .arg(columns, inner ? QStringLiteral("INNER") : QStringLiteral("LEFT"), QString::fromLatin1(open_items_by_job)),
-            {}};
-    QStringList where;
-    if (query.overdue_only) {
-        where << QStringLiteral("u.next_due < ?");
-        sql.values.push_back(store::sql_date(today));
+store::Outcome<long long> JobPages::reset(store::JobStore& store, const store::JobQuery& query) {
+    query_ = query;
+    forget_pages();
+    lines_read_ = 0;
+    pages_read_ = 0;
+    total_ = 0;
+    auto total = store.job_count(query_);
+    if (!total) {
+        error_ = total.error();
+        return total.error();
     }
-    if (query.status) {
-        where << QStringLiteral("j.status = ?");
-        sql.values.push_back(store::sql_text(store::status_text(*query.status)));
-    }
-    if (!query.search.empty()) {
-        where << QStringLiteral("(LOWER(j.reference) LIKE ? OR LOWER(j.client) LIKE ? OR LOWER(j.site) LIKE ?)");
-        QString pattern = QString::fromStdString(query.search).toLower();
-        pattern.replace(QLatin1Char('%'), QString()).replace(QLatin1Char('_'), QString());
-        pattern = QLatin1Char('%') + pattern + QLatin1Char('%');
-        for (int i = 0; i < 3; ++i) sql.values.emplace_back(pattern);
-    }
-    if (!where.isEmpty()) sql.text += QStringLiteral(" WHERE ") + where.join(QStringLiteral(" AND "));
-    return sql;
+    error_.reset();
+    total_ = *total;
+    return total_;
 }
 
-}  // namespace
+void JobPages::forget_pages() { pages_.clear(); }
 
-store::Outcome<long long> count_jobs(store::Connection& connection, const JobQuery& query, const Date& today) {
-    Sql sql = filtered(QStringLiteral("COUNT(*)"), query, today);
-    auto rows = connection.run(sql.text, sql.values, "counting jobs");
-    if (!rows) return rows.error();
-    if (!rows->next()) return 0LL;
-    return rows->value(0).toLongLong();
+void JobPages::set_page_lines(int lines) {
+    if (lines < 1 || lines == page_lines_) return;
+    page_lines_ = lines;
+    forget_pages();
 }
 
-store::Outcome<std::vector<store::JobSummary>> job_page(store::Connection& connection, const JobQuery& query,
-                                                        const Date& today, long long offset, int limit) {
-    Sql sql = filtered(QStringLiteral("j.id, j.reference, j.client, j.site, j.status, u.urgent_open, u.next_due"), query, today);
-    // Overdue first is earliest due first: an overdue job's next due date is before today.
-    sql.text += QStringLiteral(" ORDER BY (u.urgent_open IS NULL), (u.next_due IS NULL), u.next_due, j.id LIMIT ? OFFSET ?");
-    sql.values.emplace_back(limit);
-    sql.values.emplace_back(offset);
-    auto rows = connection.run(sql.text, sql.values, "listing jobs");
-    if (!rows) return rows.error();
-    std::vector<store::JobSummary> page;
-    while (rows->next()) {
-        store::JobSummary line;
-        line.id = rows->value(0).toLongLong();
-        line.reference = store::text_of(rows->value(1));
-        line.client = store::text_of(rows->value(2));
-        line.site = store::text_of(rows->value(3));
-        line.status = store::parse_status(store::text_of(rows->value(4))).value_or(store::JobStatus::surveyed);
-        line.urgent_open = rows->value(5).isNull() ? 0 : rows->value(5).toInt();
-        line.next_due = store::date_of(rows->value(6));
-        line.overdue = line.next_due && *line.next_due < today;
-        page.push_back(std::move(line));
+long long JobPages::lines_kept() const {
+    long long kept = 0;
+    for (const Page& page : pages_) kept += static_cast<long long>(page.lines.size());
+    return kept;
+}
+
+const store::JobSummary* JobPages::line(store::JobStore& store, long long row) {
+    if (row < 0 || row >= total_) return nullptr;
+    const long long number = row / page_lines_;
+    auto kept = std::find_if(pages_.begin(), pages_.end(), [number](const Page& page) { return page.number == number; });
+    if (kept == pages_.end()) {
+        auto lines = store.job_page(query_, number * page_lines_, page_lines_);
+        if (!lines) {
+            error_ = lines.error();
+            return nullptr;
+        }
+        error_.reset();
+        lines_read_ += static_cast<long long>(lines->size());
+        ++pages_read_;
+        if (static_cast<int>(pages_.size()) >= pages_kept_) {
+            auto oldest = std::min_element(pages_.begin(), pages_.end(),
+                                           [](const Page& a, const Page& b) { return a.last_used < b.last_used; });
+            pages_.erase(oldest);
+        }
+        pages_.push_back(Page{number, 0, std::move(*lines)});
+        kept = std::prev(pages_.end());
     }
-    return page;
+    kept->last_used = ++use_clock_;
+    const auto index = static_cast<std::size_t>(row - number * page_lines_);
+    return index < kept->lines.size() ? &kept->lines[index] : nullptr;
 }
 
 }  // namespace mendwright::desktop

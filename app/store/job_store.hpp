@@ -10,6 +10,7 @@
 //   auto id = (*store)->add_job(snapshot);                      // revision 1, status "surveyed"
 //   auto saved = (*store)->save_revision(*id, 1, edited);       // revision 2, or a conflict
 //   auto urgent = (*store)->list_jobs({.urgent_only = true});   // overdue first
+//   auto page = (*store)->job_page({.search = "flat 2"}, 100, 50);  // lines 100..149 found
 //
 // A save never overwrites: it adds a revision. A save edited from an older revision than the
 // latest is refused with ErrorKind::conflict. Every call is one transaction: it happens whole
@@ -82,6 +83,14 @@ public:
     // then the others by id.
     Outcome<std::vector<JobSummary>> list_jobs(const JobFilter& filter = {});
 
+    // The job list a page at a time, in list_jobs' order, filtered by `query`: at most `limit`
+    // (1 .. 10,000) lines from line `offset` (0 = the first). With job_count, a view of 100,000
+    // jobs reads only the lines it shows; each page is read straight from an index in list order
+    // (migration 4) unless a search or a status filter narrows the list first.
+    Outcome<std::vector<JobSummary>> job_page(const JobQuery& query, long long offset, int limit);
+    // How many jobs `query` matches.
+    Outcome<long long> job_count(const JobQuery& query);
+
     // Jobs with open urgent items (at most `limit`), counts of jobs by status and of open
     // urgent items by code, and how many items are overdue.
     Outcome<Dashboard> dashboard(std::optional<int> limit = std::nullopt);
@@ -93,6 +102,9 @@ private:
     Outcome<int> latest_revision(JobId job);
     Outcome<Done> write_findings(JobId job, int revision, const std::vector<FindingRecord>& findings);
     Outcome<Done> merge_urgent_items(JobId job, int revision, const std::vector<FindingRecord>& findings);
+    // The job list's lines for `query` from `offset`, at most `limit` of them (all without one).
+    Outcome<std::vector<JobSummary>> read_job_lines(const JobQuery& query, long long offset, std::optional<int> limit,
+                                                    const std::string& what);
     Outcome<UrgentItem> current_urgent_item(JobId job, const std::string& finding_id);
     // Recomputes the job's urgent_open and next_due (schema 3) after its urgent items changed.
     Outcome<Done> refresh_urgent_summary(JobId job);

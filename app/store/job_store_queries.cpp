@@ -1,5 +1,6 @@
 // Reading the store: one job, one revision, job lists and the dashboard.
 #include <QString>
+#include <QStringList>
 
 #include "app/store/job_store.hpp"
 
@@ -20,6 +21,63 @@ JobSummary summary_of(const QSqlQuery& row, const Date& today) {
     line.next_due = date_of(row.value(6));
     line.overdue = line.urgent_open > 0 && line.next_due && *line.next_due < today;
     return line;
+}
+
+// At most this many lines a page: a view shows a few dozen; more is a mistake of the caller.
+constexpr int max_page_lines = 10000;
+
+// The WHERE clause (with its values) and the ORDER BY of a job list.
+struct ListSql {
+    QString where;
+    std::vector<QVariant> values;
+    QString order;
+};
+
+// `text` as a LIKE pattern that finds it anywhere, its % _ and \ taken as plain characters.
+QString contains_pattern(const std::string& text) {
+    QString pattern = QString::fromStdString(text).toLower();
+    pattern.replace(QLatin1Char('\\'), QStringLiteral("\\\\"));
+    pattern.replace(QLatin1Char('%'), QStringLiteral("\\%"));
+    pattern.replace(QLatin1Char('_'), QStringLiteral("\\_"));
+    return QLatin1Char('%') + pattern + QLatin1Char('%');
+}
+
+ListSql list_sql(const JobQuery& query, const Date& today, Dialect dialect) {
+    ListSql list;
+    QStringList where;
+    if (query.overdue_only) {
+        where << QStringLiteral("urgent_open > 0 AND next_due < ?");
+        list.values.push_back(sql_date(today));
+    } else if (query.urgent_only) {
+        where << QStringLiteral("urgent_open > 0");
+    }
+    if (query.status) {
+        where << QStringLiteral("status = ?");
+        list.values.push_back(sql_text(status_text(*query.status)));
+    }
+    if (!query.search.empty()) {
+        // The pattern is in lower case. PostgreSQL's LIKE minds case: LOWER the columns too.
+        // SQLite's LIKE ignores ASCII case already (sqlite.org/lang_expr.html, "The LIKE, GLOB,
+        // REGEXP, MATCH, and extract operators"), and without LOWER a search of 100,000 jobs
+        // takes half the time (docs/benchmarks.md, "Desktop").
+        if (dialect == Dialect::postgresql)
+            where << QStringLiteral("(LOWER(reference) LIKE ? ESCAPE '\\' OR LOWER(client) LIKE ? ESCAPE '\\'"
+                                    " OR LOWER(site) LIKE ? ESCAPE '\\')");
+        else
+            where << QStringLiteral("(reference LIKE ? ESCAPE '\\' OR client LIKE ? ESCAPE '\\' OR site LIKE ? ESCAPE '\\')");
+        const QString pattern = contains_pattern(query.search);
+        for (int i = 0; i < 3; ++i) list.values.emplace_back(pattern);
+    }
+    if (!where.isEmpty()) list.where = QStringLiteral(" WHERE ") + where.join(QStringLiteral(" AND "));
+    // Each job carries its count of open urgent items and their earliest due date (kept by
+    // every write, migration 3). Overdue first is the same as earliest due first: an overdue
+    // job's next due date is before today, every other job's is not. Each order is that of an
+    // index (jobs_with_urgent_items for the urgent jobs, jobs_in_list_order for all, migration
+    // 4), so a page reads only its own rows and those before it.
+    list.order = query.urgent_only || query.overdue_only
+                     ? QStringLiteral("(next_due IS NULL), next_due, id")
+                     : QStringLiteral("(urgent_open = 0), (next_due IS NULL), next_due, id");
+    return list;
 }
 
 }  // namespace
@@ -157,31 +215,52 @@ Outcome<Revision> JobStore::revision(JobId job, int number) {
 }
 
 Outcome<std::vector<JobSummary>> JobStore::list_jobs(const JobFilter& filter) {
+    JobQuery query;
+    query.urgent_only = filter.urgent_only;
+    query.overdue_only = filter.overdue_only;
+    return read_job_lines(query, 0, filter.limit, "listing jobs");
+}
+
+Outcome<std::vector<JobSummary>> JobStore::job_page(const JobQuery& query, long long offset, int limit) {
+    if (offset < 0)
+        return store_error(ErrorKind::invalid_input, "offset", "expected a line number of 0 or more, got " + std::to_string(offset));
+    if (limit < 1 || limit > max_page_lines)
+        return store_error(ErrorKind::invalid_input, "limit",
+                           "expected 1 to " + std::to_string(max_page_lines) + " lines a page, got " + std::to_string(limit));
+    return read_job_lines(query, offset, limit, "reading a page of the job list");
+}
+
+Outcome<long long> JobStore::job_count(const JobQuery& query) {
+    if (schema_version_ < 3)
+        return store_error(ErrorKind::invalid_input, url().display(), "job lists need schema version 3 or later");
+    const ListSql list = list_sql(query, clock_(), connection_->dialect());
+    auto rows = connection_->run(QStringLiteral("SELECT COUNT(*) FROM jobs") + list.where, list.values, "counting jobs");
+    if (!rows) return rows.error();
+    if (!rows->next()) return 0LL;
+    return rows->value(0).toLongLong();
+}
+
+Outcome<std::vector<JobSummary>> JobStore::read_job_lines(const JobQuery& query, long long offset,
+                                                          std::optional<int> limit, const std::string& what) {
     if (schema_version_ < 3)
         return store_error(ErrorKind::invalid_input, url().display(), "job lists need schema version 3 or later");
     const Date today = clock_();
-    // Each job carries its count of open urgent items and their earliest due date (kept by
-    // every write, migration 3). Overdue first is the same as earliest due first: an overdue
-    // job's next due date is before today, every other job's is not. The order is that of the
-    // partial index jobs_with_urgent_items, so a first page reads only its own rows.
-    QString sql = QStringLiteral("SELECT id, reference, client, site, status, urgent_open, next_due FROM jobs");
-    std::vector<QVariant> values;
-    if (filter.overdue_only) {
-        sql += QStringLiteral(" WHERE urgent_open > 0 AND next_due < ?");
-        values.push_back(sql_date(today));
-    } else if (filter.urgent_only) {
-        sql += QStringLiteral(" WHERE urgent_open > 0");
-    }
-    sql += filter.urgent_only || filter.overdue_only
-               ? QStringLiteral(" ORDER BY (next_due IS NULL), next_due, id")
-               : QStringLiteral(" ORDER BY (urgent_open = 0), (next_due IS NULL), next_due, id");
-    if (filter.limit) {
+    ListSql list = list_sql(query, today, connection_->dialect());
+    QString sql = QStringLiteral("SELECT id, reference, client, site, status, urgent_open, next_due FROM jobs") + list.where +
+                  QStringLiteral(" ORDER BY ") + list.order;
+    if (limit) {
         sql += QStringLiteral(" LIMIT ?");
-        values.push_back(*filter.limit);
+        list.values.emplace_back(*limit);
     }
-    auto rows = connection_->run(sql, values, "listing jobs");
+    if (offset > 0) {
+        // SQLite takes OFFSET only after a LIMIT; a limit is always given with an offset.
+        sql += QStringLiteral(" OFFSET ?");
+        list.values.emplace_back(static_cast<qlonglong>(offset));
+    }
+    auto rows = connection_->run(sql, list.values, what);
     if (!rows) return rows.error();
     std::vector<JobSummary> lines;
+    if (limit) lines.reserve(static_cast<std::size_t>(*limit));
     while (rows->next()) lines.push_back(summary_of(*rows, today));
     return lines;
 }

@@ -36,7 +36,7 @@ struct MigrationReport {
 };
 
 // Brings the schema to `target_version`. Older SQLite files are first copied beside
-// themselves ("jobs.sqlite.before-schema-3.bak"); PostgreSQL upgrades are protected by the
+// themselves ("jobs.sqlite.before-schema-4.bak"); PostgreSQL upgrades are protected by the
 // transaction alone (its DDL is transactional). Two processes opening the same new database
 // at once are serialised: the second sees the first one's work and does nothing.
 Outcome<MigrationReport> migrate(Connection& connection, int target_version, const Clock& clock);

@@ -137,6 +137,15 @@ struct JobFilter {
     std::optional<int> limit;   // at most this many lines
 };
 
+// What a page of the job list shows (JobStore::job_page and job_count): the filters together.
+struct JobQuery {
+    bool urgent_only = false;                // jobs with at least one open urgent item
+    bool overdue_only = false;               // jobs with an open urgent item past its due date
+    std::optional<JobStatus> status;         // jobs in this status only
+    std::string search;                      // found anywhere in reference, client or site, regardless
+                                             // of ASCII case; % and _ are plain text
+};
+
 struct Dashboard {
     std::vector<JobSummary> urgent_jobs;           // overdue first, then by next due date
     std::map<std::string, long long> jobs_by_status;     // every status, 0 when none

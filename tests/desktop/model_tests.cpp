@@ -2,8 +2,10 @@
 // model contract with QAbstractItemModelTester, and the job session's behaviour against the
 // invented test surveys (tests/desktop/data) and the demo price book.
 #include <QAbstractItemModelTester>
+#include <QSet>
 #include <QSignalSpy>
 #include <QTest>
+#include <algorithm>
 #include <filesystem>
 
 #include "app/desktop/job_list_model.hpp"
@@ -36,7 +38,7 @@ class DesktopModelTests : public QObject {
     Q_OBJECT
 
 private Q_SLOTS:
-    void job_list_pages_through_many_jobs_within_the_model_contract() {
+    void job_list_reads_only_the_pages_a_view_asks_for_within_the_model_contract() {
         test::TestWorkspace fixture;
         QVERIFY2(fixture.workspace, fixture.error.c_str());
         const std::string flat = test::TestWorkspace::survey_text("flat-tncs.json");
@@ -48,15 +50,26 @@ private Q_SLOTS:
             QVERIFY2(fixture.workspace->addSurvey(text, error), error.c_str());
         }
         JobListModel jobs;
+        jobs.setPageSize(40);
         QCOMPARE(jobs.totalCount(), 250);
-        QCOMPARE(jobs.count(), 0);  // nothing read until a view asks
-        QVERIFY(jobs.canFetchMore({}));
-        jobs.fetchMore({});
-        QCOMPARE(jobs.count(), 100);  // one page
-        QAbstractItemModelTester tester(&jobs, QAbstractItemModelTester::FailureReportingMode::QtTest);
-        while (jobs.canFetchMore({})) jobs.fetchMore({});
-        QCOMPARE(jobs.count(), 250);
+        QCOMPARE(jobs.count(), 250);   // a row for every job...
+        QCOMPARE(jobs.linesRead(), 0);  // ...but nothing read until a view asks
         QCOMPARE(jobs.data(jobs.index(0), JobListModel::ReferenceRole).toString(), QStringLiteral("DT-101"));  // overdue first
+        QCOMPARE(jobs.linesRead(), 40);  // one page
+        // The last row reads its own page (rows 240..249) and none of the 200 rows between.
+        QVERIFY(jobs.data(jobs.index(249), JobListModel::ReferenceRole).toString().startsWith(QStringLiteral("PG-")));
+        QCOMPARE(jobs.linesRead(), 50);
+        QAbstractItemModelTester tester(&jobs, QAbstractItemModelTester::FailureReportingMode::QtTest);
+        // Every row in turn: each job exactly once (pages neither overlap nor skip), and only a
+        // few pages kept at a time.
+        QSet<QString> references;
+        qint64 most_kept = 0;
+        for (int row = 0; row < jobs.count(); ++row) {
+            references.insert(jobs.data(jobs.index(row), JobListModel::ReferenceRole).toString());
+            most_kept = std::max(most_kept, jobs.linesKept());
+        }
+        QCOMPARE(references.size(), 250);
+        QVERIFY(most_kept <= 8 * 40);
         QVERIFY(!jobs.canFetchMore({}));
     }
 

@@ -40,6 +40,8 @@ TEST_CASE("postgresql: the store keeps the same promises as on SQLite") {
     SECTION("quotes recorded once") { check_quotes_are_recorded_once(backend); }
     SECTION("bound parameters") { check_text_with_sql_characters_round_trips(backend); }
     SECTION("upgrade from schema 1") { check_upgrade_from_schema_1_keeps_the_jobs(backend); }
+    SECTION("job pages, filters and search") { check_job_pages_keep_the_list_order_filters_and_search(backend); }
+    SECTION("upgrade from schema 3") { check_upgrade_from_schema_3_adds_the_list_indexes_and_keeps_the_jobs(backend); }
 }
 
 TEST_CASE("postgresql: two connections saving the same job conflict instead of overwriting") {

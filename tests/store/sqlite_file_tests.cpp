@@ -77,8 +77,10 @@ TEST_CASE("sqlite file: a store written by a newer Mendwright is refused and lef
     CHECK(refused.error().kind == ErrorKind::schema_too_new);
     CHECK(refused.error().to_string() == "sqlite:" + path +
                                              ": the job store has schema version 99, newer than this Mendwright "
-                                             "understands (3); open it with a newer Mendwright. Nothing was changed.");
-    CHECK_FALSE(QFile::exists(QString::fromStdString(path + ".before-schema-3.bak")));
+                                             "understands (" + std::to_string(latest_schema_version()) +
+                                             "); open it with a newer Mendwright. Nothing was changed.");
+    CHECK_FALSE(QFile::exists(QString::fromStdString(path + ".before-schema-" + std::to_string(latest_schema_version()) +
+                                                     ".bak")));
 }
 
 TEST_CASE("sqlite file: a database of something else, or not a database, is refused untouched") {

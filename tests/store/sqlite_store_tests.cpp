@@ -59,3 +59,13 @@ TEST_CASE("sqlite: a schema 1 file is upgraded after a backup copy and keeps its
     TempFolder folder;
     check_upgrade_from_schema_1_keeps_the_jobs(sqlite_backend(folder));
 }
+
+TEST_CASE("sqlite: job pages keep the list order with filters and search and refuse bad offsets and limits") {
+    TempFolder folder;
+    check_job_pages_keep_the_list_order_filters_and_search(sqlite_backend(folder));
+}
+
+TEST_CASE("sqlite: a schema 3 file is upgraded with the job list's indexes and keeps its jobs") {
+    TempFolder folder;
+    check_upgrade_from_schema_3_adds_the_list_indexes_and_keeps_the_jobs(sqlite_backend(folder));
+}

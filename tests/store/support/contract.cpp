@@ -1,5 +1,6 @@
 #include "tests/store/support/contract.hpp"
 
+#include <algorithm>
 #include <catch2/catch.hpp>
 #include <thread>
 
@@ -369,7 +370,8 @@ void check_upgrade_from_schema_1_keeps_the_jobs(const Backend& backend) {
     CHECK(store->schema_version() == latest_schema_version());
     if (url.dialect == Dialect::sqlite) {
         REQUIRE(store->upgrade_backup().has_value());
-        CHECK(*store->upgrade_backup() == url.sqlite_path + ".before-schema-3.bak");
+        CHECK(*store->upgrade_backup() ==
+              url.sqlite_path + ".before-schema-" + std::to_string(latest_schema_version()) + ".bak");
         // The copy is the old store, still at schema 1, with the job in it.
         DatabaseUrl backup_url = url;
         backup_url.sqlite_path = *store->upgrade_backup();
@@ -398,6 +400,176 @@ void check_upgrade_from_schema_1_keeps_the_jobs(const Backend& backend) {
     // Opening again changes nothing and takes no second copy.
     auto again = open_store(url);
     CHECK_FALSE(again->upgrade_backup().has_value());
+}
+
+namespace {
+
+std::vector<JobId> ids_of(const std::vector<JobSummary>& lines) {
+    std::vector<JobId> ids;
+    for (const auto& line : lines) ids.push_back(line.id);
+    return ids;
+}
+
+// Every page of `query`, `limit` lines at a time, joined.
+std::vector<JobId> paged_ids(JobStore& store, const JobQuery& query, int limit) {
+    std::vector<JobId> ids;
+    for (long long offset = 0;; offset += limit) {
+        const auto page = must(store.job_page(query, offset, limit));
+        REQUIRE(page.size() <= static_cast<std::size_t>(limit));
+        for (const auto& line : page) ids.push_back(line.id);
+        if (page.size() < static_cast<std::size_t>(limit)) return ids;
+    }
+}
+
+// The names of the indexes on table `jobs`.
+std::vector<std::string> job_indexes(JobStore& store) {
+    const bool sqlite = store.connection().dialect() == Dialect::sqlite;
+    auto rows = store.connection().run(
+        sqlite ? QStringLiteral("SELECT name FROM sqlite_master WHERE type = 'index' AND tbl_name = 'jobs' ORDER BY name")
+               : QStringLiteral("SELECT indexname FROM pg_indexes WHERE tablename = 'jobs' AND schemaname = current_schema()"
+                                " ORDER BY indexname"),
+        {}, "listing indexes");
+    REQUIRE(rows.ok());
+    std::vector<std::string> names;
+    while (rows->next()) names.push_back(text_of(rows->value(0)));
+    return names;
+}
+
+}  // namespace
+
+void check_job_pages_keep_the_list_order_filters_and_search(const Backend& backend) {
+    auto store = open_store(backend.fresh_url());
+    // The jobs of the dashboard check, and three without urgent items, one with % and _ in its client.
+    auto a = sample_snapshot(1);
+    a.findings.erase(a.findings.begin());  // C2 due 2026-04-09 and an undated FI
+    auto b = sample_snapshot(2);           // C1 due 2026-03-01: overdue
+    auto c = sample_snapshot(3);
+    c.findings = {finding("tails.protection@origin", "C2", Date{2026, 3, 9})};  // overdue
+    auto d = sample_snapshot(4);
+    d.findings = {finding("spd.absent@board:cu", "C3")};
+    auto e = sample_snapshot(5);
+    e.findings = {finding("rcd.type@board:cu", "FI")};  // open, undated
+    auto f = sample_snapshot(6);
+    f.findings = {};
+    f.facts.client = "Invented 100%_ Lettings";
+    auto g = sample_snapshot(7);
+    g.findings = {};
+    g.facts.client = "Invented 1000 Lettings";
+    const JobId ia = must(store->add_job(a)), ib = must(store->add_job(b)), ic = must(store->add_job(c)),
+                id = must(store->add_job(d)), ie = must(store->add_job(e)), jf = must(store->add_job(f)),
+                jg = must(store->add_job(g));
+    must(store->set_status(ia, JobStatus::quoted));
+    must(store->set_status(jg, JobStatus::quoted));
+
+    // The whole list: open urgent items first (overdue first, then by due date, undated last), then by id.
+    const std::vector<JobId> order{ib, ic, ia, ie, id, jf, jg};
+    CHECK(must(store->job_count({})) == 7);
+    CHECK(ids_of(must(store->list_jobs())) == order);
+    for (int limit : {1, 2, 3, 7, 10}) {
+        INFO("limit " << limit);
+        CHECK(paged_ids(*store, {}, limit) == order);
+    }
+    const auto middle = must(store->job_page({}, 2, 3));
+    REQUIRE(middle.size() == 3);
+    CHECK(middle[0].id == ia);
+    CHECK(middle[0].urgent_open == 2);
+    CHECK(middle[0].next_due == Date{2026, 4, 9});
+    CHECK_FALSE(middle[0].overdue);
+    CHECK(middle[0].status == JobStatus::quoted);
+    CHECK(middle[0].client == "Invented Client 1");
+    CHECK(middle[2].id == id);
+    CHECK(middle[2].urgent_open == 0);
+    CHECK_FALSE(middle[2].next_due.has_value());
+    CHECK(must(store->job_page({}, 7, 5)).empty());  // past the end
+
+    // Filters, alone and together; their pages agree with their counts.
+    JobQuery urgent;
+    urgent.urgent_only = true;
+    CHECK(must(store->job_count(urgent)) == 4);
+    CHECK(paged_ids(*store, urgent, 3) == std::vector<JobId>{ib, ic, ia, ie});
+    CHECK(ids_of(must(store->list_jobs(JobFilter{true, false, std::nullopt}))) == std::vector<JobId>{ib, ic, ia, ie});
+    JobQuery overdue;
+    overdue.overdue_only = true;
+    CHECK(must(store->job_count(overdue)) == 2);
+    const auto overdue_lines = must(store->job_page(overdue, 0, 10));
+    CHECK(ids_of(overdue_lines) == std::vector<JobId>{ib, ic});
+    CHECK(overdue_lines[0].overdue);
+    JobQuery quoted;
+    quoted.status = JobStatus::quoted;
+    CHECK(must(store->job_count(quoted)) == 2);
+    CHECK(paged_ids(*store, quoted, 1) == std::vector<JobId>{ia, jg});
+    quoted.urgent_only = true;
+    CHECK(paged_ids(*store, quoted, 5) == std::vector<JobId>{ia});
+    JobQuery closed;
+    closed.status = JobStatus::closed;
+    CHECK(must(store->job_count(closed)) == 0);
+    CHECK(must(store->job_page(closed, 0, 5)).empty());
+
+    // Search: reference, client or site, anywhere in them, regardless of (ASCII) case.
+    JobQuery search;
+    search.search = "EXAMPLE ROW";  // every site
+    CHECK(must(store->job_count(search)) == 7);
+    CHECK(paged_ids(*store, search, 4) == order);
+    search.search = "inv-3";  // a reference
+    CHECK(paged_ids(*store, search, 5) == std::vector<JobId>{ic});
+    search.search = "client 4";
+    CHECK(paged_ids(*store, search, 5) == std::vector<JobId>{id});
+    search.search = "100%_";  // % and _ are text: not "100" followed by anything
+    CHECK(paged_ids(*store, search, 5) == std::vector<JobId>{jf});
+    search.search = "1%0";
+    CHECK(must(store->job_count(search)) == 0);
+    search.search = "_";  // only the client with an underscore, not every job
+    CHECK(paged_ids(*store, search, 5) == std::vector<JobId>{jf});
+    search.search = "lettings";
+    search.status = JobStatus::quoted;
+    CHECK(paged_ids(*store, search, 5) == std::vector<JobId>{jg});
+    search.search = "no such job";
+    search.status.reset();
+    CHECK(must(store->job_count(search)) == 0);
+
+    // A page is asked for with a line number of 0 or more and 1 to 10,000 lines.
+    auto negative = store->job_page({}, -1, 10);
+    REQUIRE_FALSE(negative.ok());
+    CHECK(negative.error().kind == ErrorKind::invalid_input);
+    CHECK(negative.error().field == "offset");
+    auto empty = store->job_page({}, 0, 0);
+    REQUIRE_FALSE(empty.ok());
+    CHECK(empty.error().field == "limit");
+    CHECK_FALSE(store->job_page({}, 0, 10001).ok());
+    CHECK(store->job_page({}, 0, 10000).ok());
+}
+
+void check_upgrade_from_schema_3_adds_the_list_indexes_and_keeps_the_jobs(const Backend& backend) {
+    const DatabaseUrl url = backend.fresh_url();
+    JobId first = 0, second = 0;
+    {
+        auto old = JobStore::open(url, OpenOptions{fixed_clock(pinned_today), 3});
+        REQUIRE(old.ok());
+        CHECK((*old)->schema_version() == 3);
+        first = must((*old)->add_job(sample_snapshot(1)));
+        auto plain = sample_snapshot(2);
+        plain.findings = {finding("spd.absent@board:cu", "C3")};
+        second = must((*old)->add_job(plain));
+        must((*old)->set_status(second, JobStatus::accepted));
+        const auto indexes = job_indexes(**old);
+        CHECK(std::find(indexes.begin(), indexes.end(), "jobs_by_status") != indexes.end());
+        CHECK(std::find(indexes.begin(), indexes.end(), "jobs_in_list_order") == indexes.end());
+    }
+    auto store = open_store(url);
+    CHECK(store->schema_version() == 4);
+    const auto indexes = job_indexes(*store);
+    CHECK(std::find(indexes.begin(), indexes.end(), "jobs_in_list_order") != indexes.end());
+    CHECK(std::find(indexes.begin(), indexes.end(), "jobs_by_status_in_list_order") != indexes.end());
+    CHECK(std::find(indexes.begin(), indexes.end(), "jobs_by_status") == indexes.end());
+    const auto lines = must(store->job_page({}, 0, 10));
+    REQUIRE(lines.size() == 2);
+    CHECK(lines[0].id == first);
+    CHECK(lines[0].urgent_open == 3);
+    CHECK(lines[0].overdue);
+    CHECK(lines[1].id == second);
+    CHECK(lines[1].status == JobStatus::accepted);
+    CHECK(must(store->job(second)).history.size() == 2);
+    CHECK(must(store->dashboard()).jobs_by_status.at("accepted") == 1);
 }
 
 }  // namespace mendwright::store::testing

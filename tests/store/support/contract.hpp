@@ -17,5 +17,7 @@ void check_text_with_sql_characters_round_trips(const Backend& backend);
 void check_two_connections_conflict_instead_of_overwriting(const Backend& backend);
 void check_two_threads_saving_lose_no_revision(const Backend& backend);
 void check_upgrade_from_schema_1_keeps_the_jobs(const Backend& backend);
+void check_job_pages_keep_the_list_order_filters_and_search(const Backend& backend);
+void check_upgrade_from_schema_3_adds_the_list_indexes_and_keeps_the_jobs(const Backend& backend);
 
 }  // namespace mendwright::store::testing
