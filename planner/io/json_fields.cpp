@@ -82,41 +82,35 @@ ObjectReader::ObjectReader(const Json& json, std::string path, Diagnostics& diag
 }
 
 const Json* ObjectReader::field(std::string_view key, Need need, const std::string& expected) {
-    known_.emplace_back(key);
-    if (!object_) return nullptr;
-    const auto it = object_->find(std::string(key));
-    const bool absent = it == object_->end() || (it->is_null() && need == Need::optional);
-    if (absent) {
-        if (need == Need::required) diagnostics_.error(path_of(key), "missing; " + expected);
-        return nullptr;
-    }
-    return &*it;
+    return present(key, need, [&] { return expected; });
 }
 
 std::optional<std::string> ObjectReader::text(std::string_view key, Need need, bool allow_empty) {
-    const std::string expected = allow_empty ? "expected a string" : "expected a non-empty string";
-    const Json* value = field(key, need, expected);
+    const auto expected = [allow_empty] {
+        return std::string(allow_empty ? "expected a string" : "expected a non-empty string");
+    };
+    const Json* value = present(key, need, expected);
     if (!value) return std::nullopt;
     if (!value->is_string() || (!allow_empty && value->get_ref<const std::string&>().empty())) {
-        diagnostics_.error(path_of(key), expected + ", got " + shown(*value));
+        diagnostics_.error(path_of(key), expected() + ", got " + shown(*value));
         return std::nullopt;
     }
     return value->get<std::string>();
 }
 
 std::optional<double> ObjectReader::number(std::string_view key, Need need, const NumberRange& range) {
-    const std::string expected = "expected " + range_text(range);
-    const Json* value = field(key, need, expected);
+    const auto expected = [&] { return "expected " + range_text(range); };
+    const Json* value = present(key, need, expected);
     if (!value) return std::nullopt;
     if (!value->is_number()) {
-        diagnostics_.error(path_of(key), expected + ", got " + shown(*value));
+        diagnostics_.error(path_of(key), expected() + ", got " + shown(*value));
         return std::nullopt;
     }
     const double number = value->get<double>();
     const bool too_small = range.minimum_exclusive ? !(number > range.minimum) : !(number >= range.minimum);
     const bool too_large = range.maximum && number > *range.maximum;
     if (!std::isfinite(number) || too_small || too_large) {
-        std::string message = expected + ", got " + shown(*value);
+        std::string message = expected() + ", got " + shown(*value);
         if (too_large && !range.maximum_hint.empty()) message += " (" + range.maximum_hint + ")";
         diagnostics_.error(path_of(key), message);
         return std::nullopt;
@@ -125,17 +119,18 @@ std::optional<double> ObjectReader::number(std::string_view key, Need need, cons
 }
 
 std::optional<long long> ObjectReader::whole_number(std::string_view key, Need need, long long minimum, long long maximum) {
-    const std::string expected =
-        "expected a whole number from " + std::to_string(minimum) + " to " + std::to_string(maximum);
-    const Json* value = field(key, need, expected);
+    const auto expected = [&] {
+        return "expected a whole number from " + std::to_string(minimum) + " to " + std::to_string(maximum);
+    };
+    const Json* value = present(key, need, expected);
     if (!value) return std::nullopt;
     if (auto number = whole_number_of(*value); number && *number >= minimum && *number <= maximum) return number;
-    diagnostics_.error(path_of(key), expected + ", got " + shown(*value));
+    diagnostics_.error(path_of(key), expected() + ", got " + shown(*value));
     return std::nullopt;
 }
 
 std::optional<bool> ObjectReader::flag(std::string_view key) {
-    const Json* value = field(key, Need::optional, "expected true or false");
+    const Json* value = present(key, Need::optional, [] { return std::string("expected true or false"); });
     if (!value) return std::nullopt;
     if (!value->is_boolean()) {
         diagnostics_.error(path_of(key), "expected true or false, got " + shown(*value));
@@ -145,7 +140,7 @@ std::optional<bool> ObjectReader::flag(std::string_view key) {
 }
 
 std::optional<Date> ObjectReader::date(std::string_view key, Need need) {
-    const Json* value = field(key, need, "expected a date as YYYY-MM-DD");
+    const Json* value = present(key, need, [] { return std::string("expected a date as YYYY-MM-DD"); });
     if (!value) return std::nullopt;
     if (!value->is_string()) {
         diagnostics_.error(path_of(key), "expected a date as YYYY-MM-DD, got " + shown(*value));
@@ -163,7 +158,7 @@ void ObjectReader::reject_unknown_fields() {
     if (!object_) return;
     for (auto it = object_->begin(); it != object_->end(); ++it) {
         const std::string& key = it.key();
-        if (std::find(known_.begin(), known_.end(), key) != known_.end()) continue;
+        if (std::find(known_.begin(), known_.end(), std::string_view(key)) != known_.end()) continue;
         std::string message = "unknown field (not part of " + std::string(survey_format_name) + " version " +
                               std::to_string(survey_format_version) + ")";
         std::string best;
@@ -171,7 +166,7 @@ void ObjectReader::reject_unknown_fields() {
         for (const auto& candidate : known_) {
             const std::size_t distance = edit_distance(key, candidate);
             if (distance < best_distance && object_->find(candidate) == object_->end()) {
-                best = candidate;
+                best = std::string(candidate);
                 best_distance = distance;
             }
         }

@@ -75,12 +75,13 @@ public:
 
     template <class Enum>
     std::optional<Enum> word(std::string_view key, Need need, const WordTable<Enum>& table) {
-        const std::string expected = "expected one of " + word_list(table);
-        const Json* value = field(key, need, expected);
+        // The message is put together only when it is needed (a survey has thousands of fields).
+        const auto expected = [&] { return "expected one of " + word_list(table); };
+        const Json* value = present(key, need, expected);
         if (!value) return std::nullopt;
         if (value->is_string())
             if (auto found = enum_of(table, value->get_ref<const std::string&>())) return found;
-        diagnostics_.error(path_of(key), expected + ", got " + shown(*value));
+        diagnostics_.error(path_of(key), expected() + ", got " + shown(*value));
         return std::nullopt;
     }
 
@@ -88,10 +89,26 @@ public:
     void reject_unknown_fields();
 
 private:
+    // field() with the "expected ..." text made by `expected()` only when the field is missing.
+    template <class Expected>
+    const Json* present(std::string_view key, Need need, const Expected& expected) {
+        known_.push_back(key);
+        if (!object_) return nullptr;
+        const auto it = object_->find(key);
+        const bool absent = it == object_->end() || (it->is_null() && need == Need::optional);
+        if (absent) {
+            if (need == Need::required) diagnostics_.error(path_of(key), "missing; " + expected());
+            return nullptr;
+        }
+        return &*it;
+    }
+
     const Json* object_ = nullptr;
     std::string path_;
     Diagnostics& diagnostics_;
-    std::vector<std::string> known_;
+    // The keys asked for; each accessor's key outlives the reader (the survey reader passes
+    // string literals).
+    std::vector<std::string_view> known_;
 };
 
 }  // namespace mendwright::io

@@ -1,5 +1,6 @@
 #include "planner/io/survey_document.hpp"
 
+#include <algorithm>
 #include <set>
 
 #include "planner/io/json_fields.hpp"
@@ -36,42 +37,53 @@ namespace {
 // Parses the text, recording each key that appears twice in one object (JSON parsers keep
 // only one of the two values, which would silently drop the other).
 std::optional<Json> parse_json(std::string_view text, Diagnostics& d) {
+    // One frame per open object or array. Frames are reused as the parser goes in and out (no
+    // allocation per object), and JSON paths are put together only for a key that repeats.
     struct Frame {
         bool is_array = false;
         std::size_t index = 0;
-        std::set<std::string> keys;
-        std::string key;
-        std::string path;
+        std::vector<std::string> keys;  // an object's keys so far (a handful: a linear search)
+        std::size_t key_count = 0;
     };
     std::vector<Frame> stack;
-    const auto child_path = [&]() -> std::string {
-        if (stack.empty()) return "";
-        const Frame& top = stack.back();
-        return top.is_array ? index_path(top.path, top.index) : field_path(top.path, top.key);
+    std::size_t depth = 0;
+    const auto path_of_open = [&]() {  // the path of the innermost open object or array
+        std::string path;
+        for (std::size_t i = 1; i < depth; ++i) {
+            const Frame& parent = stack[i - 1];
+            path = parent.is_array ? index_path(path, parent.index) : field_path(path, parent.keys[parent.key_count - 1]);
+        }
+        return path;
     };
     const auto value_done = [&] {
-        if (!stack.empty() && stack.back().is_array) ++stack.back().index;
+        if (depth > 0 && stack[depth - 1].is_array) ++stack[depth - 1].index;
     };
     const Json::parser_callback_t callback = [&](int, Json::parse_event_t event, Json& parsed) {
         switch (event) {
             case Json::parse_event_t::object_start:
             case Json::parse_event_t::array_start: {
-                Frame frame;
+                if (depth == stack.size()) stack.emplace_back();
+                Frame& frame = stack[depth++];
                 frame.is_array = event == Json::parse_event_t::array_start;
-                frame.path = child_path();
-                stack.push_back(std::move(frame));
+                frame.index = 0;
+                frame.key_count = 0;
                 break;
             }
             case Json::parse_event_t::key: {
-                Frame& top = stack.back();
-                top.key = parsed.get<std::string>();
-                if (!top.keys.insert(top.key).second)
-                    d.error(field_path(top.path, top.key), "appears twice in the same object; expected each field once");
+                Frame& top = stack[depth - 1];
+                const auto& key = parsed.get_ref<const std::string&>();
+                const auto begin = top.keys.begin();
+                const auto end = begin + static_cast<std::ptrdiff_t>(top.key_count);
+                const bool repeated = std::find(begin, end, key) != end;
+                if (top.key_count == top.keys.size()) top.keys.emplace_back();
+                top.keys[top.key_count++] = key;
+                if (repeated)
+                    d.error(field_path(path_of_open(), key), "appears twice in the same object; expected each field once");
                 break;
             }
             case Json::parse_event_t::object_end:
             case Json::parse_event_t::array_end:
-                if (!stack.empty()) stack.pop_back();
+                if (depth > 0) --depth;
                 value_done();
                 break;
             case Json::parse_event_t::value:
