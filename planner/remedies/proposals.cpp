@@ -1,6 +1,7 @@
 #include "planner/remedies/proposals.hpp"
 
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <set>
 #include <sstream>
@@ -107,6 +108,12 @@ std::string board_name(const model::Board& board) {
 }
 
 std::string number_text(double value, int decimals) {
+    // What std::fixed with setprecision prints (printf's "%.*f", which std::to_chars in fixed
+    // format with a precision matches, C++17 [charconv.to.chars]), without a stream per number:
+    // ranking writes thousands of these.
+    char text[64];
+    const auto [end, error] = std::to_chars(text, text + sizeof text, value, std::chars_format::fixed, decimals);
+    if (error == std::errc()) return std::string(text, end);
     std::ostringstream out;
     out << std::fixed << std::setprecision(decimals) << value;
     return out.str();

@@ -2,7 +2,7 @@
 
 #include <algorithm>
 #include <cctype>
-#include <tuple>
+#include <string_view>
 #include <unordered_map>
 
 #include "planner/rules/context.hpp"
@@ -42,31 +42,53 @@ DueDate due_date_for(const model::JobFacts& job, const RulesProfile& profile) {
 
 std::vector<Finding> assess(const model::Installation& installation, const RulesProfile& profile) {
     const AssessContext context(installation, profile);
-    std::vector<Finding> findings;
-    for (const auto& rule : rule_table()) {
-        auto found = rule.check(context);
-        findings.insert(findings.end(), std::make_move_iterator(found.begin()), std::make_move_iterator(found.end()));
-    }
+    // Each rule's findings stay where the rule put them until they are moved, once, into their
+    // place in the order below (assess runs hundreds of times per remedy search).
+    std::vector<std::vector<Finding>> by_rule;
+    by_rule.reserve(rule_table().size());
+    for (const auto& rule : rule_table()) by_rule.push_back(rule.check(context));
 
     const DueDate due = due_date_for(installation.job, profile);
-    for (auto& finding : findings) {
-        if (!finding.urgent()) continue;
-        finding.due = due.date;
-        finding.due_text = due.text;
+    for (auto& found : by_rule) {
+        for (auto& finding : found) {
+            if (!finding.urgent()) continue;
+            finding.due = due.date;
+            finding.due_text = due.text;
+        }
     }
 
-    // Deterministic order: code, then place in the document (installation-wide first), then id.
-    std::unordered_map<std::string, std::size_t> board_position;
-    std::unordered_map<std::string, std::size_t> circuit_position;
+    // Deterministic order: code, then place in the document (installation-wide first), then id;
+    // findings equal on all of these keep the order of the rule table (a stable sort).
+    std::unordered_map<std::string_view, std::size_t> board_position;
+    std::unordered_map<std::string_view, std::size_t> circuit_position;
+    board_position.reserve(installation.boards.size());
+    circuit_position.reserve(context.circuits().size());
     for (const auto& entry : context.circuits()) circuit_position.emplace(entry.circuit->id, entry.circuit_index);
     for (std::size_t b = 0; b < installation.boards.size(); ++b) board_position.emplace(installation.boards[b].id, b + 1);
-    const auto key = [&](const Finding& f) {
-        const auto board = board_position.find(f.board_id);
-        const auto circuit = circuit_position.find(f.circuit_id);
-        return std::make_tuple(code_rank(f.code), board == board_position.end() ? 0 : board->second,
-                               circuit == circuit_position.end() ? 0 : circuit->second + 1, std::cref(f.id));
+    struct SortKey {
+        int code = 0;
+        std::size_t board = 0;
+        std::size_t circuit = 0;
+        Finding* finding = nullptr;
     };
-    std::stable_sort(findings.begin(), findings.end(), [&](const Finding& a, const Finding& b) { return key(a) < key(b); });
+    std::vector<SortKey> keys;
+    for (auto& found : by_rule) {
+        for (auto& f : found) {
+            const auto board = board_position.find(f.board_id);
+            const auto circuit = circuit_position.find(f.circuit_id);
+            keys.push_back({code_rank(f.code), board == board_position.end() ? 0 : board->second,
+                            circuit == circuit_position.end() ? 0 : circuit->second + 1, &f});
+        }
+    }
+    std::stable_sort(keys.begin(), keys.end(), [](const SortKey& a, const SortKey& b) {
+        if (a.code != b.code) return a.code < b.code;
+        if (a.board != b.board) return a.board < b.board;
+        if (a.circuit != b.circuit) return a.circuit < b.circuit;
+        return a.finding->id < b.finding->id;
+    });
+    std::vector<Finding> findings;
+    findings.reserve(keys.size());
+    for (const auto& key : keys) findings.push_back(std::move(*key.finding));
     return findings;
 }
 
