@@ -32,6 +32,8 @@ struct JobFacts {
     Date inspection_date;
     std::string inspector;
     std::string country;    // "england", "wales", "scotland", ... ; due dates depend on it
+
+    bool operator==(const JobFacts&) const = default;  // field by field (remedies compare copies)
 };
 
 struct Supply {
@@ -42,6 +44,8 @@ struct Supply {
     double supply_fuse_rating_amps = 100.0;
     std::optional<double> prospective_fault_current_ka;
     std::optional<double> ze_ohms;
+
+    bool operator==(const Supply&) const = default;  // field by field (remedies compare copies)
 };
 
 enum class ElectrodeKind { rod, tape, plate };
@@ -62,6 +66,8 @@ struct Electrode {
     // When re-measured after remedial work: the figure the re-test gave.
     std::optional<double> remeasured_ra_ohms;
     std::optional<Date> remeasured_on;
+
+    bool operator==(const Electrode&) const = default;  // field by field (remedies compare copies)
 };
 
 enum class TailsRoute { surface, concealed_in_wall, buried };
@@ -73,6 +79,8 @@ struct MeterTails {
     TailsRoute route = TailsRoute::surface;
     bool mechanically_protected = false;  // armoured, or in conduit/trunking that protects them
     TailsOriginProtection origin_protection = TailsOriginProtection::none;
+
+    bool operator==(const MeterTails&) const = default;  // field by field (remedies compare copies)
 };
 
 enum class DeviceKind { main_switch, rcd, circuit_breaker, rcbo, fuse, switch_fuse };
@@ -93,6 +101,8 @@ struct Device {
     std::string fuse_standard;             // fuses: "BS 3036", "BS 1361", "BS 88-3", ...
     std::string label;                     // as marked on the board, optional
     bool installed_new = false;            // fitted by remedial work (set by remedies)
+
+    bool operator==(const Device&) const = default;  // field by field (remedies compare copies)
 };
 
 enum class CircuitUse { sockets, lighting, cooker, shower, immersion, outdoor, submain, other };
@@ -116,6 +126,8 @@ struct Circuit {
     std::optional<double> standing_leakage_ma;  // protective-conductor current in normal use
     std::optional<double> rcd_trip_ms_at_idn;   // RCD test at IΔn, at this circuit
     std::optional<double> rcd_trip_ms_at_5idn;  // RCD test at 5 IΔn
+
+    bool operator==(const Circuit&) const = default;  // field by field (remedies compare copies)
 };
 
 enum class EnclosureMaterial { metal, non_combustible_other, combustible };
@@ -131,6 +143,8 @@ struct Board {
     bool new_work = false;        // installed by remedial work: the rules for new work apply
     std::vector<Device> devices;  // main switch, RCDs, switch-fuses
     std::vector<Circuit> circuits;
+
+    bool operator==(const Board&) const = default;  // field by field (remedies compare copies)
 };
 
 struct Observation {
@@ -141,6 +155,8 @@ struct Observation {
     std::optional<std::string> circuit_id;
     std::optional<std::string> item_code;  // price-book item for the fix
     double item_quantity = 1.0;
+
+    bool operator==(const Observation&) const = default;  // field by field (remedies compare copies)
 };
 
 struct Installation {
@@ -150,6 +166,8 @@ struct Installation {
     MeterTails tails;
     std::vector<Board> boards;
     std::vector<Observation> observations;
+
+    bool operator==(const Installation&) const = default;  // field by field (remedies compare copies)
 };
 
 }  // namespace mendwright::model

@@ -4,50 +4,80 @@ namespace mendwright::remedies {
 
 using nlohmann::json;
 
+namespace {
+
+// An array of strings, built in place (the initializer-list form copies every value again).
+json string_array(const std::vector<std::string>& items) {
+    json array = json::array();
+    auto& list = array.get_ref<json::array_t&>();
+    list.reserve(items.size());
+    for (const auto& item : items) list.emplace_back(item);
+    return array;
+}
+
+}  // namespace
+
 json option_json(const Option& option) {
     const auto& v = option.verification;
     json bill = json::array();
-    for (const auto& line : option.bill)
-        bill.push_back({{"item_code", line.item_code}, {"quantity", line.quantity}, {"note", line.note}});
-    json cost = {{"materials_pence", option.cost.materials_pence},
-                 {"labour_pence", option.cost.labour_pence},
-                 {"total_pence", option.cost.total_pence},
-                 {"priced", option.cost.priced}};
+    for (const auto& line : option.bill) {
+        json entry = json::object();
+        entry["item_code"] = line.item_code;
+        entry["quantity"] = line.quantity;
+        entry["note"] = line.note;
+        bill.push_back(std::move(entry));
+    }
+    json cost = json::object();
+    cost["materials_pence"] = option.cost.materials_pence;
+    cost["labour_pence"] = option.cost.labour_pence;
+    cost["total_pence"] = option.cost.total_pence;
+    cost["priced"] = option.cost.priced;
     if (!option.cost.priced) cost["problem"] = option.cost.problem;
-    return {{"id", option.id},
-            {"kind", option.kind},
-            {"title", option.title},
-            {"description", option.description},
-            {"targets", option.targets},
-            {"verification",
-             {{"cleared", v.cleared},
-              {"still_open", v.still_open},
-              {"introduced", v.introduced},
-              {"introduced_urgent", v.introduced_urgent},
-              {"clears_every_urgent_target", v.clears_every_urgent_target}}},
-            {"cost", cost},
-            {"bill", bill},
-            {"hours_off_supply", option.hours_off_supply},
-            {"notifiable", option.notifiable},
-            {"certificate", option.certificate},
-            {"assumptions", option.assumptions},
-            {"prerequisites", option.prerequisites},
-            {"leaves_open", option.leaves_open},
-            {"excludes_with_slots", option.slots},
-            {"ranked_last", option.ranked_last},
-            {"rank_reasons", option.rank_reasons}};
+    json verification = json::object();
+    verification["cleared"] = string_array(v.cleared);
+    verification["still_open"] = string_array(v.still_open);
+    verification["introduced"] = string_array(v.introduced);
+    verification["introduced_urgent"] = string_array(v.introduced_urgent);
+    verification["clears_every_urgent_target"] = v.clears_every_urgent_target;
+    json result = json::object();
+    result["id"] = option.id;
+    result["kind"] = option.kind;
+    result["title"] = option.title;
+    result["description"] = option.description;
+    result["targets"] = string_array(option.targets);
+    result["verification"] = std::move(verification);
+    result["cost"] = std::move(cost);
+    result["bill"] = std::move(bill);
+    result["hours_off_supply"] = option.hours_off_supply;
+    result["notifiable"] = option.notifiable;
+    result["certificate"] = option.certificate;
+    result["assumptions"] = string_array(option.assumptions);
+    result["prerequisites"] = string_array(option.prerequisites);
+    result["leaves_open"] = string_array(option.leaves_open);
+    result["excludes_with_slots"] = string_array(option.slots);
+    result["ranked_last"] = option.ranked_last;
+    result["rank_reasons"] = string_array(option.rank_reasons);
+    return result;
 }
 
 json options_json(const std::vector<Option>& options, const std::vector<FindingRanking>& rankings) {
     json list = json::array();
+    list.get_ref<json::array_t&>().reserve(options.size());
     for (const auto& option : options) list.push_back(option_json(option));
     json by_finding = json::array();
-    for (const auto& ranking : rankings)
-        by_finding.push_back({{"finding", ranking.finding_id},
-                              {"code", rules::code_text(ranking.code)},
-                              {"options", ranking.option_ids},
-                              {"reasons", ranking.reasons}});
-    return {{"options", list}, {"by_finding", by_finding}};
+    by_finding.get_ref<json::array_t&>().reserve(rankings.size());
+    for (const auto& ranking : rankings) {
+        json entry = json::object();
+        entry["finding"] = ranking.finding_id;
+        entry["code"] = rules::code_text(ranking.code);
+        entry["options"] = string_array(ranking.option_ids);
+        entry["reasons"] = string_array(ranking.reasons);
+        by_finding.push_back(std::move(entry));
+    }
+    json result = json::object();
+    result["options"] = std::move(list);
+    result["by_finding"] = std::move(by_finding);
+    return result;
 }
 
 json plan_json(const Plan& plan) {

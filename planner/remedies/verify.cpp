@@ -2,10 +2,12 @@
 
 #include <algorithm>
 #include <set>
+#include <string_view>
 #include <unordered_map>
 #include <unordered_set>
 
 #include "planner/model/navigation.hpp"
+#include <optional>
 
 namespace mendwright::remedies {
 
@@ -17,26 +19,28 @@ model::Installation applied_copy(const model::Installation& installation, const 
 
 Verification compare_findings(const std::vector<rules::Finding>& before, const std::vector<rules::Finding>& after,
                               const std::vector<std::string>& targets) {
-    std::unordered_set<std::string> before_ids;
-    std::unordered_set<std::string> after_ids;
-    for (const auto& f : before) before_ids.insert(f.id);
+    // Ids are looked up by view into the findings (no copies: this runs once per option).
+    std::unordered_map<std::string_view, bool> urgent_before;  // id -> coded C1, C2 or FI
+    std::unordered_set<std::string_view> after_ids;
+    urgent_before.reserve(before.size());
+    after_ids.reserve(after.size());
+    for (const auto& f : before) urgent_before[f.id] = f.urgent();
     for (const auto& f : after) after_ids.insert(f.id);
     Verification v;
     v.done = true;
     for (const auto& f : before)
         if (!after_ids.count(f.id)) v.cleared.push_back(f.id);
     for (const auto& f : after) {
-        if (before_ids.count(f.id)) continue;
+        if (urgent_before.count(f.id)) continue;
         v.introduced.push_back(f.id);
         if (f.urgent()) v.introduced_urgent.push_back(f.id);
     }
-    std::unordered_map<std::string, bool> urgent_before;
-    for (const auto& f : before) urgent_before[f.id] = f.urgent();
     bool all_urgent_cleared = true;
     for (const auto& id : targets) {
         if (after_ids.count(id)) {
             v.still_open.push_back(id);
-            if (urgent_before[id]) all_urgent_cleared = false;
+            const auto found = urgent_before.find(id);
+            if (found != urgent_before.end() && found->second) all_urgent_cleared = false;
         }
     }
     v.clears_every_urgent_target = all_urgent_cleared;
@@ -47,39 +51,85 @@ Verification compare_findings(const std::vector<rules::Finding>& before, const s
     return v;
 }
 
+// The board tree by ids: the board each board is fed from, the boards each feeds, and the
+// circuit feeding each board.
+struct Verifier::BoardTree {
+    std::unordered_map<std::string, std::string> parent;
+    std::unordered_map<std::string, std::vector<std::string>> children;
+    std::unordered_map<std::string, const model::Circuit*> feeder;
+    std::unordered_map<std::string, const model::Board*> board;
+};
+
 namespace {
 
-// Parent board of each board (by the circuit feeding it), built once per installation.
-std::unordered_map<std::string, std::string> parent_boards(const model::Installation& installation) {
-    std::unordered_map<std::string, std::string> parent;
-    for (const auto& board : installation.boards)
-        for (const auto& circuit : board.circuits)
-            if (circuit.feeds_board_id) parent[*circuit.feeds_board_id] = board.id;
-    return parent;
-}
+using BoardTree = Verifier::BoardTree;
 
-std::set<std::string> view_boards(const model::Installation& installation, const std::vector<std::string>& boards) {
-    const auto parent = parent_boards(installation);
-    std::unordered_map<std::string, std::vector<std::string>> children;
-    for (const auto& [child, p] : parent) children[p].push_back(child);
-    std::set<std::string> keep;
-    std::vector<std::string> stack(boards.begin(), boards.end());
-    while (!stack.empty()) {  // the touched boards and everything below them
-        std::string id = stack.back();
-        stack.pop_back();
-        if (!keep.insert(id).second) continue;
-        for (const auto& child : children[id]) stack.push_back(child);
-    }
-    for (const auto& id : boards) {  // and the chain above
-        std::string current = id;
-        for (std::size_t hops = 0; hops <= installation.boards.size(); ++hops) {
-            auto it = parent.find(current);
-            if (it == parent.end()) break;
-            current = it->second;
-            keep.insert(current);
+BoardTree board_tree(const model::Installation& installation) {
+    BoardTree tree;
+    for (const auto& board : installation.boards) {
+        tree.board.emplace(board.id, &board);
+        for (const auto& circuit : board.circuits) {
+            if (!circuit.feeds_board_id) continue;
+            tree.parent.emplace(*circuit.feeds_board_id, board.id);
+            tree.feeder.emplace(*circuit.feeds_board_id, &circuit);
+            tree.children[board.id].push_back(*circuit.feeds_board_id);
         }
     }
-    return keep;
+    return tree;
+}
+
+void add_subtree(const BoardTree& tree, const std::string& top, std::set<std::string>& into) {
+    std::set<std::string> seen;  // not `into`: it may hold `top` already, as a board above another
+    std::vector<std::string> stack = {top};
+    while (!stack.empty()) {
+        std::string id = stack.back();
+        stack.pop_back();
+        if (!seen.insert(id).second) continue;
+        into.insert(id);
+        if (auto it = tree.children.find(id); it != tree.children.end())
+            for (const auto& child : it->second) stack.push_back(child);
+    }
+}
+
+// Which boards a view of `touched` keeps, and which of them the option may change.
+struct ViewPlan {
+    std::set<std::string> keep;
+    std::set<std::string> changeable;  // the touched boards and every board below them
+};
+
+// The touched boards and everything below them; the chain of boards above them; and, so that
+// the rules adding up over every circuit below an RCD (standing leakage, trip times) see all of
+// them, everything below the board of the furthest RCD or RCBO above a touched board.
+ViewPlan plan_view(const model::Installation& installation, const BoardTree& tree, const std::vector<std::string>& touched) {
+    ViewPlan plan;
+    for (const auto& id : touched) add_subtree(tree, id, plan.changeable);
+    plan.keep = plan.changeable;
+    for (const auto& id : touched) {
+        std::string current = id;
+        std::string furthest_rcd_board;
+        for (std::size_t hops = 0; hops <= installation.boards.size(); ++hops) {
+            const auto up = tree.parent.find(current);
+            if (up == tree.parent.end()) break;
+            const model::Circuit* feed = tree.feeder.at(current);
+            const model::Board* parent = tree.board.at(up->second);
+            // The feeding circuit's device and the parent board's devices above it.
+            bool residual = model::is_residual_current_device(feed->device);
+            std::optional<std::string> next = feed->upstream_id;
+            for (std::size_t steps = 0; next && steps <= parent->devices.size(); ++steps) {
+                const model::Device* found = nullptr;
+                for (const auto& device : parent->devices)
+                    if (device.id == *next) found = &device;
+                if (!found) break;
+                residual = residual || model::is_residual_current_device(*found);
+                next = found->upstream_id;
+            }
+            if (residual) furthest_rcd_board = parent->id;
+            current = parent->id;
+            plan.keep.insert(current);
+        }
+        if (!furthest_rcd_board.empty()) add_subtree(tree, furthest_rcd_board, plan.keep);
+    }
+    return plan;
 }
 
 std::string view_key(const std::set<std::string>& boards) {
@@ -88,10 +138,7 @@ std::string view_key(const std::set<std::string>& boards) {
     return key;
 }
 
-}  // namespace
-
-model::Installation board_view(const model::Installation& installation, const std::vector<std::string>& boards) {
-    const std::set<std::string> keep = view_boards(installation, boards);
+model::Installation view_of(const model::Installation& installation, const std::set<std::string>& keep) {
     model::Installation view;
     view.job = installation.job;
     view.supply = installation.supply;
@@ -104,10 +151,55 @@ model::Installation board_view(const model::Installation& installation, const st
     return view;
 }
 
-Verifier::Verifier(const model::Installation& installation, Assessor assess)
-    : installation_(installation), assess_(std::move(assess)), baseline_(assess_(installation)) {
-    for (const auto& f : baseline_) baseline_ids_.insert(f.id);
+// Whether the option, applied to the view, changed nothing outside the boards it may change:
+// the same supply, electrode, tails and job; the same boards in the same places, equal unless
+// changeable; the same observations apart from those about changeable boards. The view's
+// verdict rests on this, so it is checked rather than taken from the option.
+bool changes_confined(const model::Installation& before, const model::Installation& after,
+                      const std::set<std::string>& changeable) {
+    if (!(before.job == after.job) || !(before.supply == after.supply) || !(before.electrode == after.electrode) ||
+        !(before.tails == after.tails) || before.boards.size() != after.boards.size())
+        return false;
+    std::unordered_map<std::string_view, std::string_view> circuit_board;
+    for (std::size_t b = 0; b < before.boards.size(); ++b) {
+        const auto& was = before.boards[b];
+        const auto& now = after.boards[b];
+        if (was.id != now.id) return false;
+        if (!changeable.count(was.id) && !(was == now)) return false;
+        for (const auto& circuit : was.circuits) circuit_board.emplace(circuit.id, was.id);
+    }
+    const auto outside = [&](const model::Observation& o) {
+        if (o.board_id && changeable.count(*o.board_id)) return false;
+        if (o.circuit_id) {
+            const auto it = circuit_board.find(*o.circuit_id);
+            if (it != circuit_board.end() && changeable.count(std::string(it->second))) return false;
+        }
+        return true;
+    };
+    std::vector<const model::Observation*> was, now;
+    for (const auto& o : before.observations)
+        if (outside(o)) was.push_back(&o);
+    for (const auto& o : after.observations)
+        if (outside(o)) now.push_back(&o);
+    if (was.size() != now.size()) return false;
+    for (std::size_t i = 0; i < was.size(); ++i)
+        if (!(*was[i] == *now[i])) return false;
+    return true;
 }
+
+}  // namespace
+
+model::Installation board_view(const model::Installation& installation, const std::vector<std::string>& boards) {
+    return view_of(installation, plan_view(installation, board_tree(installation), boards).keep);
+}
+
+Verifier::Verifier(const model::Installation& installation, Assessor assess)
+    : installation_(installation), assess_(std::move(assess)), baseline_(assess_(installation)),
+      tree_(std::make_unique<BoardTree>(board_tree(installation))) {
+    for (const auto& f : baseline_) baseline_boards_.emplace(f.id, f.board_id);
+}
+
+Verifier::~Verifier() = default;
 
 Verification Verifier::verify_whole(const Option& option) {
     const model::Installation copy = applied_copy(installation_, option);
@@ -115,23 +207,39 @@ Verification Verifier::verify_whole(const Option& option) {
 }
 
 Verification Verifier::verify(const Option& option) {
-    if (option.whole_installation || option.touched_boards.empty() ||
-        view_boards(installation_, option.touched_boards).size() == installation_.boards.size())
-        return verify_whole(option);
+    if (option.whole_installation || option.touched_boards.empty()) return verify_whole(option);
+    const ViewPlan plan = plan_view(installation_, *tree_, option.touched_boards);
+    if (plan.keep.size() >= installation_.boards.size()) return verify_whole(option);
+    // A target must be a finding about a board of the view: an installation-wide one (RA not
+    // recorded, say) may rest on boards the view leaves out.
+    for (const auto& id : option.targets) {
+        const auto found = baseline_boards_.find(id);
+        if (found == baseline_boards_.end() || found->second.empty() || !plan.keep.count(found->second))
+            return verify_whole(option);
+    }
     // Before: the view of the surveyed installation (cached per set of boards).
-    const std::set<std::string> keep = view_boards(installation_, option.touched_boards);
-    const std::string key = view_key(keep);
+    const std::string key = view_key(plan.keep);
+    model::Installation view = view_of(installation_, plan.keep);
     auto cached = view_baselines_.find(key);
-    if (cached == view_baselines_.end())
-        cached = view_baselines_.emplace(key, assess_(board_view(installation_, option.touched_boards))).first;
-    // After: the option applied to that same view.
-    model::Installation view = board_view(installation_, option.touched_boards);
-    if (option.apply) option.apply(view);
-    Verification v = compare_findings(cached->second, assess_(view), option.targets);
-    // A view can show findings that the whole installation does not have (a submain to a board
-    // left out of the view); only findings the whole installation has count as cleared.
+    if (cached == view_baselines_.end()) cached = view_baselines_.emplace(key, assess_(view)).first;
+    const std::vector<rules::Finding>& before = cached->second;
+    // After: the option applied to a copy of that same view; it must have changed only the
+    // boards it touches (and those below), or the whole installation is assessed instead.
+    model::Installation changed = view;
+    if (option.apply) option.apply(changed);
+    if (!changes_confined(view, changed, plan.changeable)) return verify_whole(option);
+    const std::vector<rules::Finding> after = assess_(changed);
+    Verification v = compare_findings(before, after, option.targets);
+    // An installation-wide finding that comes or goes in the view may rest on boards left out
+    // (RA not recorded is there if any circuit anywhere has an RCD): the whole decides.
+    std::unordered_set<std::string_view> moved(v.cleared.begin(), v.cleared.end());
+    moved.insert(v.introduced.begin(), v.introduced.end());
+    for (const auto* side : {&before, &after})
+        for (const auto& f : *side)
+            if (f.board_id.empty() && moved.count(f.id)) return verify_whole(option);
+    // Defensive: only findings the whole installation has can count as cleared.
     v.cleared.erase(std::remove_if(v.cleared.begin(), v.cleared.end(),
-                                   [&](const std::string& id) { return !baseline_ids_.count(id); }),
+                                   [&](const std::string& id) { return !baseline_boards_.count(id); }),
                     v.cleared.end());
     return v;
 }

@@ -3,15 +3,20 @@
 // compare the findings by id. The option's own claims play no part in the verdict.
 //
 // For speed on large installations an option that changes only some boards is verified on a
-// view of the installation: the boards it touches, every board below them and the chain of
-// boards above them (with that chain's other submains kept as cables to boards left out). The
-// same view of the unchanged installation is the "before", so what the view leaves out is the
-// same on both sides. Options at the origin, and every plan (combined_findings), are verified on
-// the whole installation.
+// view of the installation: the boards it touches and everything below them, the chain of
+// boards above them, and everything below the board of the furthest RCD or RCBO above them (so
+// that the rules adding up over every circuit below an RCD see them all). The same view of the
+// unchanged installation is the "before". The view's verdict is the whole installation's
+// verdict when the option changed nothing outside the touched boards and those below (checked
+// on the copy, not taken from the option), targets no installation-wide finding, and no
+// installation-wide finding comes or goes; otherwise, and for options at the origin and every
+// plan (combined_copy), the whole installation is assessed. Tests compare the two verdicts for
+// every option on the demo jobs and on random installations.
 
 #include <functional>
 #include <map>
-#include <unordered_set>
+#include <memory>
+#include <unordered_map>
 #include <string>
 #include <vector>
 
@@ -30,7 +35,12 @@ Verification compare_findings(const std::vector<rules::Finding>& before, const s
 
 class Verifier {
 public:
+    struct BoardTree;  // parents, children and feeding circuits by board id (verify.cpp)
+
     Verifier(const model::Installation& installation, Assessor assess);
+    ~Verifier();
+    Verifier(const Verifier&) = delete;
+    Verifier& operator=(const Verifier&) = delete;
 
     [[nodiscard]] const std::vector<rules::Finding>& baseline() const { return baseline_; }
     [[nodiscard]] const model::Installation& installation() const { return installation_; }
@@ -48,11 +58,12 @@ private:
     const model::Installation& installation_;
     Assessor assess_;
     std::vector<rules::Finding> baseline_;
-    std::unordered_set<std::string> baseline_ids_;
+    std::unordered_map<std::string, std::string> baseline_boards_;  // finding id -> its board (empty: installation-wide)
     std::map<std::string, std::vector<rules::Finding>> view_baselines_;  // by view key
+    std::unique_ptr<BoardTree> tree_;  // the surveyed installation's board tree, walked once
 };
 
-// The view described above: `boards` and everything below and above them. Exposed for tests.
+// The view described above of `boards` (touched boards). Exposed for tests.
 model::Installation board_view(const model::Installation& installation, const std::vector<std::string>& boards);
 
 // Verifies every option (sets option.verification).
