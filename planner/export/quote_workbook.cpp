@@ -2,6 +2,7 @@
 
 #include <xlsxwriter.h>
 
+#include <algorithm>
 #include <map>
 
 #include "planner/export/replace_file.hpp"
@@ -124,14 +125,29 @@ void Writer::quote_sheet_contents() {
     lxw_row_t row = row_table_header + 1;
     first_line_row = row;
 
-    // What a client reads for a finding: its code, title and place ("C2 No RCD ... (Kitchen
-    // sockets)"); the finding's id stays on the Findings sheet for cross-reference.
-    std::map<std::string, std::string> words_of_finding;
-    for (const auto& quoted : quote.findings) {
-        const auto& finding = quoted.finding;
-        words_of_finding[finding.id] =
-            finding.code + " " + finding.title + (finding.location.empty() ? std::string() : " (" + finding.location + ")");
-    }
+    // What a client reads for the findings an option puts right: code, title and place ("C2 No
+    // RCD ... (Kitchen sockets)"); the same finding at several places is said once with its count
+    // and the places are left to the Findings sheet, which also keeps the finding ids.
+    std::map<std::string, const pricing::ScheduledFinding*> finding_of_id;
+    for (const auto& quoted : quote.findings) finding_of_id[quoted.finding.id] = &quoted.finding;
+    auto puts_right_text = [&](const std::vector<std::string>& finding_ids) {
+        std::vector<std::pair<std::string, std::vector<std::string>>> places_of_title;  // in order of first mention
+        for (const auto& id : finding_ids) {
+            auto found = finding_of_id.find(id);
+            const std::string title = found == finding_of_id.end() ? id : found->second->code + " " + found->second->title;
+            const std::string place = found == finding_of_id.end() ? std::string() : found->second->location;
+            auto same = std::find_if(places_of_title.begin(), places_of_title.end(),
+                                     [&](const auto& entry) { return entry.first == title; });
+            if (same == places_of_title.end()) places_of_title.push_back({title, {place}});
+            else same->second.push_back(place);
+        }
+        std::vector<std::string> parts;
+        for (const auto& [title, places] : places_of_title) {
+            if (places.size() > 1) parts.push_back(title + " (at " + std::to_string(places.size()) + " places: see Findings)");
+            else parts.push_back(title + (places.front().empty() ? std::string() : " (" + places.front() + ")"));
+        }
+        return parts.empty() ? std::string() : "Puts right: " + joined(parts, "; ");
+    };
     constexpr std::size_t merged_width_chars = 150;
 
     auto write_lines = [&](const std::string& heading, const std::vector<CostedLine>& lines, const std::string& prefix,
@@ -175,13 +191,8 @@ void Writer::quote_sheet_contents() {
 
     for (std::size_t g = 0; g < quote.works.groups.size(); ++g) {
         const auto& group = quote.works.groups[g];
-        std::vector<std::string> clears;
-        for (const auto& id : group.clears_findings) {
-            auto words = words_of_finding.find(id);
-            clears.push_back(words == words_of_finding.end() ? id : words->second);
-        }
-        const std::string puts_right = clears.empty() ? std::string() : "Puts right: " + joined(clears, "; ");
-        write_lines(group.title, group.lines, "group[" + std::to_string(g) + "]", totals.group_pence[g], puts_right);
+        write_lines(group.title, group.lines, "group[" + std::to_string(g) + "]", totals.group_pence[g],
+                    puts_right_text(group.clears_findings));
     }
     if (!quote.works.extra_lines.empty()) {
         write_lines("Additional items", quote.works.extra_lines, "extras", totals.extras_pence, std::string());

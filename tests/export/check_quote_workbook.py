@@ -95,8 +95,13 @@ def check_structure(base, expected):
     # of each finding, never our internal finding ids (common practice: a quote a client can read).
     puts_right = [t for t in texts if t.startswith("Puts right: ")]
     if name == "sample-quote":
-        check(any("C2 No device gives fault protection: RA 310 ohm, no RCD (Consumer unit, hall)" in t
-                  for t in puts_right), f"{name}: no line says the first option puts right the C2 finding: {puts_right!r}")
+        first = next((t for t in puts_right if "RA 310 ohm" in t), "")
+        # One finding at one place: code, title and place.
+        check("C2 Meter tails 4 m long, concealed, with no protection at the origin (Meter position to consumer unit)"
+              in first, f"{name}: the first option's line does not name the tails finding: {first!r}")
+        # The same finding at two places: said once, with the count.
+        check("C2 No device gives fault protection: RA 310 ohm, no RCD (at 2 places: see Findings)" in first,
+              f"{name}: the first option's line does not group the two C2 findings: {first!r}")
     check(not any("@" in t for t in puts_right), f"{name}: a 'Puts right' line shows finding ids: {puts_right!r}")
     for sheet in SHEETS[1:]:
         check(formulas[sheet].freeze_panes is not None, f"{name}: {sheet} has no frozen header")

@@ -16,6 +16,8 @@ Result<Quote> sample_quote(const std::string& price_book_folder, std::size_t lin
     request.findings = {
         {"tt.fault_protection@board:main", "C2", "No device gives fault protection: RA 310 ohm, no RCD",
          "Consumer unit, hall", "BS 7671 411.5.3"},
+        {"tt.fault_protection@board:garage", "C2", "No device gives fault protection: RA 310 ohm, no RCD",
+         "Garage board", "BS 7671 411.5.3"},
         {"tt.electrode_stability@installation", "C3", "Electrode resistance above 200 ohm may not be stable",
          "Earth electrode, front garden", "BS 7671 Table 41.5 note"},
         {"tails.unprotected@board:main", "C2", "Meter tails 4 m long, concealed, with no protection at the origin",
@@ -29,7 +31,7 @@ Result<Quote> sample_quote(const std::string& price_book_folder, std::size_t lin
         options = {
             {"opt-rcd-origin",
              "Time-delayed 100 mA RCD at the origin, tails in armoured cable",
-             {"tt.fault_protection@board:main", "tails.unprotected@board:main"},
+             {"tt.fault_protection@board:main", "tt.fault_protection@board:garage", "tails.unprotected@board:main"},
              {{"RCD-S100-ENCL", 1, ""},
               {"TAILS-SWA-25-M", 3.7, "meter to board"},
               {"CONDUIT-MECH-M", 1.35, "where the run leaves the wall"},
