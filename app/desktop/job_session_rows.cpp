@@ -38,6 +38,25 @@ QString joined(const std::vector<std::string>& items, const QString& separator) 
     return list.join(separator);
 }
 
+// The same finding at several places said once with its count: "C2 No RCD ... (× 5)", in the
+// order of first mention.
+QStringList counted(const QStringList& titles) {
+    QStringList distinct;
+    QList<int> counts;
+    for (const auto& title : titles) {
+        const auto at = distinct.indexOf(title);
+        if (at < 0) {
+            distinct << title;
+            counts << 1;
+        } else {
+            ++counts[at];
+        }
+    }
+    for (qsizetype i = 0; i < distinct.size(); ++i)
+        if (counts[i] > 1) distinct[i] = JobSession::tr("%1 (× %2)").arg(distinct[i]).arg(counts[i]);
+    return distinct;
+}
+
 QString hours_text(double hours) { return JobSession::tr("%1 h").arg(qtext(rules::number_text(hours, 1))); }
 
 QString plan_label(const std::string& name) {
@@ -104,11 +123,11 @@ void JobSession::refreshOptionRows() {
                             {"cost", option->cost.priced ? money(option->cost.total_pence) : tr("not priced")},
                             {"costPence", static_cast<qint64>(option->cost.total_pence)},
                             {"priced", option->cost.priced},
-                            {"clears", clears.join(QStringLiteral("\n"))},
+                            {"clears", counted(clears).join(QStringLiteral("\n"))},
                             {"clearsCount", static_cast<int>(clears.size())},
-                            {"introduces", introduces.join(QStringLiteral("\n"))},
+                            {"introduces", counted(introduces).join(QStringLiteral("\n"))},
                             {"introducesUrgent", !option->verification.introduced_urgent.empty()},
-                            {"stillOpen", still_open.join(QStringLiteral("\n"))},
+                            {"stillOpen", counted(still_open).join(QStringLiteral("\n"))},
                             {"hoursOff", hours_text(option->hours_off_supply)},
                             {"notifiable", option->notifiable},
                             {"certificate", qtext(option->certificate)},
@@ -288,7 +307,7 @@ void JobSession::refreshWorksRows() {
             rows.push_back({{"kind", QStringLiteral("group")}, {"title", qtext(group.title)}, {"code", qtext(group.option_id)},
                             {"description", QString()}, {"quantity", QString()}, {"unit", QString()}, {"unitCost", QString()},
                             {"materials", QString()}, {"labour", QString()}, {"total", money(totals.group_pence.at(g))},
-                            {"note", QString()}, {"clears", clears.join(QStringLiteral("; "))},
+                            {"note", QString()}, {"clears", counted(clears).join(QStringLiteral("; "))},
                             {"groupIndex", static_cast<int>(g)}, {"lineIndex", -1}});
             for (std::size_t i = 0; i < group.lines.size(); ++i)
                 rows.push_back(line_row(group.lines[i], QStringLiteral("line"), static_cast<int>(g), static_cast<int>(i)));
