@@ -85,23 +85,17 @@ FocusScope {
 
             // Observations.
             BodyText { text: qsTr("Recorded observations"); font.bold: true; font.pixelSize: Theme.headingSize }
+            BodyText {
+                text: qsTr("Place each observation on its board and, where it concerns one, a circuit of that board. "
+                           + "Name the price-book item that puts it right to have it offered as a priced remedy.")
+                muted: true
+                Layout.fillWidth: true
+            }
             Repeater {
                 model: root.session.observations
-                delegate: RowLayout {
-                    required property string observationId
-                    required property string code
-                    required property string text
-                    required property string location
+                delegate: ObservationEditor {
                     Layout.fillWidth: true
-                    spacing: Theme.step
-                    CodeBadge { code: parent.code; compact: true }
-                    BodyText { text: parent.text; Layout.fillWidth: true }
-                    BodyText { text: parent.location; muted: true }
-                    ActionButton {
-                        text: qsTr("Remove")
-                        Accessible.name: qsTr("Remove observation %1").arg(parent.text)
-                        onClicked: root.session.removeObservation(parent.observationId)
-                    }
+                    session: root.session
                 }
             }
             RowLayout {

@@ -150,6 +150,11 @@ public:
     Q_INVOKABLE static QVariantList choices(const QString& field);
     Q_INVOKABLE QString addObservation(const QString& text, const QString& code);
     Q_INVOKABLE QString removeObservation(const QString& observation_id);
+    // One field of an observation: "text", "code", "board", "circuit", "itemCode" (checked against
+    // the price book in use; "" clears it) or "itemQuantity" (survey_edits.hpp, edit_observation).
+    Q_INVOKABLE QString editObservation(const QString& observation_id, const QString& field, const QString& text);
+    // [{value: code, text}] of the price book in use, for the observations' item drop-down.
+    Q_INVOKABLE QVariantList priceItemChoices() const;
     Q_INVOKABLE void undo();
     Q_INVOKABLE void redo();
     // Unit and range of an editable field, for the editor's hints: {label, unit, range}.

@@ -132,6 +132,18 @@ QString JobSession::removeObservation(const QString& observation_id) {
     });
 }
 
+QString JobSession::editObservation(const QString& observation_id, const QString& field, const QString& text) {
+    if (!workspace_) return tr("no job open");
+    const pricing::PriceBook& book = workspace_->book();
+    return applyEdit([&](model::Installation& installation) {
+        return edit_observation(installation, observation_id.toStdString(), field.toStdString(), text.toStdString(), book);
+    });
+}
+
+QVariantList JobSession::priceItemChoices() const {
+    return workspace_ ? price_item_choices(workspace_->book()) : QVariantList();
+}
+
 void JobSession::undo() {
     if (undo_.empty()) return;
     const std::string previous = undo_.back();
@@ -174,22 +186,7 @@ void JobSession::refreshSurveyRows() {
     boards_model_->setRows(board_rows(*installation_));
     devices_model_->setRows(device_rows(*installation_));
     circuits_model_->setRows(circuit_rows(*installation_));
-    QList<QVariantMap> observations;
-    for (const auto& observation : installation_->observations) {
-        QString location;
-        if (observation.circuit_id) location = qtext(*observation.circuit_id);
-        else if (observation.board_id) location = qtext(*observation.board_id);
-        QString code = observation.code == model::ObservationCode::c1   ? QStringLiteral("C1")
-                       : observation.code == model::ObservationCode::c2 ? QStringLiteral("C2")
-                       : observation.code == model::ObservationCode::c3 ? QStringLiteral("C3")
-                                                                        : QStringLiteral("FI");
-        observations.push_back({{"observationId", qtext(observation.id)},
-                                {"code", code},
-                                {"text", qtext(observation.text)},
-                                {"location", location},
-                                {"itemCode", qtext(observation.item_code.value_or(""))}});
-    }
-    observations_model_->setRows(std::move(observations));
+    observations_model_->setRows(observation_rows(*installation_, workspace_->book()));
 }
 
 }  // namespace mendwright::desktop

@@ -1,7 +1,11 @@
 #include "app/desktop/survey_edits.hpp"
 
 #include <algorithm>
+#include <cctype>
+#include <cmath>
+#include <exception>
 #include <optional>
+#include <string>
 
 #include "app/desktop/survey_fields.hpp"
 #include "planner/io/survey_enums.hpp"
@@ -414,6 +418,108 @@ std::string remove_circuit(model::Installation& installation, std::string_view c
             return {};
         }
     return "no circuit " + id;
+}
+
+namespace {
+
+// "board cu (Consumer unit)": a board as the refusals name it.
+std::string board_words(const model::Board& board) {
+    return "board " + board.id + (board.name.empty() ? std::string() : " (" + board.name + ")");
+}
+
+std::string set_observation_board(model::Installation& installation, model::Observation& observation,
+                                  std::string_view text) {
+    const std::string id = trimmed(text);
+    if (id.empty()) {
+        if (!observation.board_id && !observation.circuit_id) return std::string(unchanged);
+        observation.board_id.reset();
+        observation.circuit_id.reset();
+        return {};
+    }
+    const model::Board* board = model::find_board(installation, id);
+    if (!board) return "Board: no board \"" + id + "\" in the survey; expected the id of one of its boards";
+    if (observation.board_id == id) return std::string(unchanged);
+    observation.board_id = id;
+    if (observation.circuit_id) {
+        const auto ref = model::find_circuit(installation, *observation.circuit_id);
+        if (!ref.board || ref.board->id != id) observation.circuit_id.reset();
+    }
+    return {};
+}
+
+std::string set_observation_circuit(model::Installation& installation, model::Observation& observation,
+                                    std::string_view text) {
+    const std::string id = trimmed(text);
+    if (id.empty()) return assign(observation.circuit_id, std::optional<std::string>());
+    const auto ref = model::find_circuit(installation, id);
+    if (!ref.circuit) return "Circuit: no circuit \"" + id + "\" in the survey; expected the id of a circuit of a board";
+    if (observation.board_id && ref.board->id != *observation.board_id) {
+        const model::Board* chosen = model::find_board(installation, *observation.board_id);
+        return "Circuit: circuit " + ref.circuit->number + " (" + id + ") is on " + board_words(*ref.board) + ", not on " +
+               (chosen ? board_words(*chosen) : "board " + *observation.board_id) +
+               "; choose the board first, or a circuit of that board";
+    }
+    std::string result = assign(observation.circuit_id, std::optional<std::string>(id));
+    if (!observation.board_id) {
+        observation.board_id = ref.board->id;
+        result.clear();
+    }
+    return result;
+}
+
+std::string set_observation_item(model::Observation& observation, std::string_view text, const pricing::PriceBook& book) {
+    const std::string code = trimmed(text);
+    if (code.empty()) return assign(observation.item_code, std::optional<std::string>());
+    if (!book.find(code))
+        return "Price-book item: no item \"" + code + "\" in the price book; expected one of its codes, or nothing";
+    return assign(observation.item_code, std::optional<std::string>(code));
+}
+
+// Quantities of the survey format: above 0, at most 100000 (docs/survey-format.md, item_quantity).
+std::string set_observation_quantity(model::Observation& observation, std::string_view text) {
+    const std::string word = trimmed(text);
+    double quantity = 0.0;
+    std::size_t used = 0;
+    bool read = !word.empty();
+    if (read) {
+        try {
+            quantity = std::stod(word, &used);
+        } catch (const std::exception&) {
+            read = false;
+        }
+    }
+    if (!read || used != word.size() || !std::isfinite(quantity))
+        return "Quantity: expected a number above 0, got \"" + std::string(text) + "\"";
+    if (quantity <= 0.0 || quantity > 100000.0)
+        return "Quantity: expected above 0 and at most 100000, got " + word;
+    return assign(observation.item_quantity, quantity);
+}
+
+}  // namespace
+
+std::string edit_observation(model::Installation& installation, std::string_view observation_id,
+                             std::string_view field, std::string_view text, const pricing::PriceBook& book) {
+    auto found = std::find_if(installation.observations.begin(), installation.observations.end(),
+                              [&](const model::Observation& o) { return o.id == observation_id; });
+    if (found == installation.observations.end()) return "no observation " + std::string(observation_id);
+    model::Observation& observation = *found;
+    if (field == "text") {
+        const std::string words = trimmed(text);
+        if (words.empty()) return "Observation: expected the inspector's words, got nothing";
+        return assign(observation.text, words);
+    }
+    if (field == "code") {
+        std::string word = trimmed(text);
+        std::transform(word.begin(), word.end(), word.begin(), [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        const auto code = io::enum_of(io::observation_code_words(), word);
+        if (!code) return "Code: expected C1, C2, C3 or FI, got \"" + std::string(text) + "\"";
+        return assign(observation.code, *code);
+    }
+    if (field == "board") return set_observation_board(installation, observation, text);
+    if (field == "circuit") return set_observation_circuit(installation, observation, text);
+    if (field == "itemCode") return set_observation_item(observation, text, book);
+    if (field == "itemQuantity") return set_observation_quantity(observation, text);
+    return "no such field of an observation: " + std::string(field);
 }
 
 }  // namespace mendwright::desktop

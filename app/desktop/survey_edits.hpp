@@ -15,6 +15,7 @@
 
 #include "planner/core/date.hpp"
 #include "planner/model/installation.hpp"
+#include "planner/pricing/price_book.hpp"
 
 namespace mendwright::desktop {
 
@@ -57,6 +58,20 @@ std::string remove_device(model::Installation& installation, std::string_view de
 // A final circuit of "other" use on a 16 A type B circuit-breaker, 2.5/1.5 mm², numbered next.
 std::string add_circuit(model::Installation& installation, std::string_view board_id);
 std::string remove_circuit(model::Installation& installation, std::string_view circuit_id);
+
+// One field of the recorded observation `observation_id`:
+//   text          the inspector's words (required)
+//   code          C1, C2, C3 or FI (any case)
+//   board         a board id; "" = the installation as a whole (the circuit goes too); a circuit
+//                 not on the new board is let go
+//   circuit       a circuit id of the observation's board (with no board yet, the circuit's board
+//                 is taken); "" = no particular circuit
+//   itemCode      a code of `book` (the price book the session prices with), the item that makes
+//                 the observation good: proposed as a priced line among the remedies; "" clears it
+//   itemQuantity  how many of the item, in its unit: above 0, at most 100000
+// Refusals name the field and what was given: `Price-book item: no item "XYZ" in the price book`.
+std::string edit_observation(model::Installation& installation, std::string_view observation_id,
+                             std::string_view field, std::string_view text, const pricing::PriceBook& book);
 
 // After a device's kind changes: fills what the new kind needs and clears what it must not carry
 // (docs/survey-format.md, "what each kind of device must and must not carry").

@@ -229,6 +229,9 @@ QVariantList field_choices(const QString& field) {
                 choice("switch_fuse", tr("Switch-fuse"))};
     if (field == QLatin1String("circuitDeviceKind"))
         return {choice("circuit_breaker", tr("MCB")), choice("rcbo", tr("RCBO")), choice("fuse", tr("Fuse"))};
+    if (field == QLatin1String("observationCode"))
+        return {choice("C1", tr("C1 · Danger present")), choice("C2", tr("C2 · Potentially dangerous")),
+                choice("C3", tr("C3 · Improvement recommended")), choice("FI", tr("FI · Further investigation"))};
     if (field == QLatin1String("curve"))
         return {choice("b", tr("Type B")), choice("c", tr("Type C")), choice("d", tr("Type D"))};
     if (field == QLatin1String("rcdType"))
@@ -242,6 +245,63 @@ QVariantList field_choices(const QString& field) {
                 choice("immersion", tr("Immersion heater")), choice("outdoor", tr("Outdoor")),
                 choice("submain", tr("Submain")), choice("other", tr("Other"))};
     return {};
+}
+
+namespace {
+
+QString board_name(const model::Board& board) { return qtext(board.name.empty() ? board.id : board.name); }
+
+QString circuit_words(const model::Circuit& circuit) {
+    return circuit.description.empty() ? tr("circuit %1").arg(qtext(circuit.number))
+                                       : tr("circuit %1 %2").arg(qtext(circuit.number), qtext(circuit.description));
+}
+
+QVariantMap id_choice(const std::string& id, const QString& text) {
+    return {{QStringLiteral("value"), qtext(id)}, {QStringLiteral("text"), text}};
+}
+
+}  // namespace
+
+QList<QVariantMap> observation_rows(const model::Installation& installation, const pricing::PriceBook& book) {
+    QVariantList board_choices{id_choice("", tr("The installation as a whole"))};
+    for (const auto& board : installation.boards)
+        board_choices.push_back(id_choice(board.id, board.location.empty()
+                                                        ? board_name(board)
+                                                        : tr("%1 (%2)").arg(board_name(board), qtext(board.location))));
+    QList<QVariantMap> rows;
+    for (const auto& observation : installation.observations) {
+        const model::Board* board = observation.board_id ? model::find_board(installation, *observation.board_id) : nullptr;
+        const auto circuit = observation.circuit_id ? model::find_circuit(installation, *observation.circuit_id)
+                                                    : model::CircuitRef{};
+        QString place = tr("The installation as a whole");
+        if (board && circuit.circuit) place = tr("%1, %2").arg(board_name(*board), circuit_words(*circuit.circuit));
+        else if (board) place = board_name(*board);
+        QVariantList circuit_choices{id_choice("", tr("No particular circuit"))};
+        if (board)
+            for (const auto& c : board->circuits) circuit_choices.push_back(id_choice(c.id, circuit_words(c)));
+        const pricing::PriceItem* item = observation.item_code ? book.find(*observation.item_code) : nullptr;
+        rows.push_back({{"observationId", qtext(observation.id)},
+                        {"code", qtext(io::word_of(io::observation_code_words(), observation.code)).toUpper()},
+                        {"text", qtext(observation.text)},
+                        {"location", place},
+                        {"boardId", qtext(observation.board_id.value_or(""))},
+                        {"circuitId", qtext(observation.circuit_id.value_or(""))},
+                        {"boardChoices", board_choices},
+                        {"circuitChoices", circuit_choices},
+                        {"itemCode", qtext(observation.item_code.value_or(""))},
+                        {"itemQuantity", qtext(rules::number_text(observation.item_quantity, 6))},
+                        {"itemUnit", item ? qtext(item->unit) : QString()},
+                        {"itemDescription", item ? qtext(item->description) : QString()}});
+    }
+    return rows;
+}
+
+QVariantList price_item_choices(const pricing::PriceBook& book) {
+    QVariantList choices{id_choice("", tr("No item: not priced"))};
+    for (const auto& item : book.items)
+        choices.push_back(id_choice(item.code, tr("%1: %2 (%3)").arg(qtext(item.code), qtext(item.description),
+                                                                     qtext(item.unit))));
+    return choices;
 }
 
 }  // namespace mendwright::desktop

@@ -9,6 +9,7 @@
 #include <QVariantMap>
 
 #include "planner/model/installation.hpp"
+#include "planner/pricing/price_book.hpp"
 
 namespace mendwright::desktop {
 
@@ -21,6 +22,15 @@ QList<QVariantMap> board_rows(const model::Installation& installation);
 // below it) with its depth and its board's id.
 QList<QVariantMap> device_rows(const model::Installation& installation);
 QList<QVariantMap> circuit_rows(const model::Installation& installation);
+
+// Each recorded observation: its words and code, its place in words ("Consumer unit, circuit 1
+// Downstairs sockets") with the drop-down choices of boards and of that board's circuits, and
+// its price-book item with the quantity, the item's unit and description from `book`.
+QList<QVariantMap> observation_rows(const model::Installation& installation, const pricing::PriceBook& book);
+
+// [{value: code, text: "code: description (unit)"}] of every item of the book, in its order,
+// after {value: "", text: "No item: not priced"}.
+QVariantList price_item_choices(const pricing::PriceBook& book);
 
 // [{value: "tt", text: "TT"}, ...] for a choice field (see survey_edits.hpp); empty for others.
 // "boardDeviceKind" and "circuitDeviceKind" are the kinds a board's or a circuit's device may be.

@@ -1,6 +1,6 @@
 // Tests of the survey editor of the desktop application (app/desktop/survey_edits.*,
 // survey_rows.*, job_session_survey.cpp): supply, tails, electrode, boards with their device
-// trees and circuits entered or corrected through JobSession, each accepted edit a revision,
+// trees, circuits and recorded observations (place, price-book item) entered or corrected through JobSession, each accepted edit a revision,
 // refusals naming the field with its unit and range (or the survey reader's path), and the
 // findings following the edits. Surveys: the invented ones of tests/desktop/data.
 #include <QAbstractItemModelTester>
@@ -60,6 +60,21 @@ QList<QVariantMap> devices_of(const JobSession& session, const QString& board_id
 QString device_id_of_kind(const JobSession& session, const QString& board_id, const QString& kind, int skip = 0) {
     for (const auto& device : devices_of(session, board_id))
         if (device.value("kind").toString() == kind && skip-- == 0) return device.value("deviceId").toString();
+    return {};
+}
+
+// The row of JobSession.observations of `observation_id`.
+QVariantMap observation_row(const JobSession& session, const QString& observation_id) {
+    const RecordListModel& rows = *session.observations();
+    return rows.get(rows.indexOf(QStringLiteral("observationId"), observation_id));
+}
+
+// The remedy option of the recorded observation `observation_id` among the options of its
+// finding ("recorded@observation:<id>"); an empty map when none is offered.
+QVariantMap recorded_item_option(JobSession& session, const QString& observation_id) {
+    session.selectFinding(QStringLiteral("recorded@observation:") + observation_id);
+    for (const auto& option : session.options()->rows())
+        if (option.value("optionId").toString().startsWith(QStringLiteral("recorded-item@"))) return option;
     return {};
 }
 
@@ -271,6 +286,114 @@ private Q_SLOTS:
         QCOMPARE(session.revision(), 9);
         QVERIFY(session.errorText().isEmpty());
         QVERIFY(!has_finding(session, "additional_protection", circuit));
+    }
+
+    void an_observation_is_placed_on_a_board_and_circuit_and_given_a_price_book_item() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        JobSession session;
+        QVERIFY(open_job(session, QStringLiteral("DT-101")));
+        const int first = session.revision();
+        QVariantMap row = observation_row(session, "o1");
+        QCOMPARE(row.value("location").toString(), QStringLiteral("Consumer unit, circuit 1 Downstairs sockets"));
+        // The board drop-down: the installation as a whole, then each board by name and place.
+        QCOMPARE(row.value("boardChoices").toList().size(), 2);
+        QCOMPARE(row.value("boardChoices").toList().at(1).toMap().value("text").toString(),
+                 QStringLiteral("Consumer unit (Utility room)"));
+        QCOMPARE(row.value("circuitChoices").toList().size(), 5);  // none + c1..c4 of the board
+        // The demo price book (pricebook-demo/items.csv, invented prices): the item's unit is shown.
+        QCOMPARE(row.value("itemUnit").toString(), QStringLiteral("each"));
+
+        QCOMPARE(session.editObservation("o1", "circuit", "c3"), QString());
+        QCOMPARE(observation_row(session, "o1").value("location").toString(), QStringLiteral("Consumer unit, circuit 3 Cooker"));
+        // The installation as a whole: the circuit goes with the board.
+        QCOMPARE(session.editObservation("o1", "board", ""), QString());
+        row = observation_row(session, "o1");
+        QCOMPARE(row.value("location").toString(), QStringLiteral("The installation as a whole"));
+        QCOMPARE(row.value("circuitId").toString(), QString());
+        QCOMPARE(row.value("circuitChoices").toList().size(), 1);
+        // A circuit chosen with no board: the circuit's board is taken.
+        QCOMPARE(session.editObservation("o1", "circuit", "c2"), QString());
+        QCOMPARE(observation_row(session, "o1").value("boardId").toString(), QStringLiteral("cu"));
+        QCOMPARE(session.editObservation("o1", "itemCode", "SOCKET-DBL-REPLACE"), QString());
+        QCOMPARE(session.editObservation("o1", "itemQuantity", "2"), QString());
+        QCOMPARE(session.editObservation("o1", "text", "Two socket-outlets cracked"), QString());
+        QCOMPARE(session.editObservation("o1", "code", "c3"), QString());  // any case
+        row = observation_row(session, "o1");
+        QCOMPARE(row.value("itemCode").toString(), QStringLiteral("SOCKET-DBL-REPLACE"));
+        QCOMPARE(row.value("itemQuantity").toString(), QStringLiteral("2"));
+        QCOMPARE(row.value("text").toString(), QStringLiteral("Two socket-outlets cracked"));
+        QCOMPARE(row.value("code").toString(), QStringLiteral("C3"));
+        QCOMPARE(session.revision(), first + 7);
+        // Setting what is there already saves nothing.
+        QCOMPARE(session.editObservation("o1", "itemQuantity", "2.0"), QString());
+        QCOMPARE(session.revision(), first + 7);
+        // Empty clears the item.
+        QCOMPARE(session.editObservation("o1", "itemCode", ""), QString());
+        QCOMPARE(observation_row(session, "o1").value("itemCode").toString(), QString());
+        QCOMPARE(observation_row(session, "o1").value("itemUnit").toString(), QString());
+
+        // Undo and redo step through the observation's revisions.
+        session.undo();
+        QCOMPARE(observation_row(session, "o1").value("itemCode").toString(), QStringLiteral("SOCKET-DBL-REPLACE"));
+        session.undo();
+        QCOMPARE(observation_row(session, "o1").value("code").toString(), QStringLiteral("C2"));
+        session.redo();
+        QCOMPARE(observation_row(session, "o1").value("code").toString(), QStringLiteral("C3"));
+        QVERIFY(session.canRedo());
+        QVERIFY(session.errorText().isEmpty());
+    }
+
+    void an_observation_edit_refused_names_the_field_and_saves_nothing() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        JobSession session;
+        QVERIFY(open_job(session, QStringLiteral("DT-101")));
+        QCOMPARE(session.addBoard("cu"), QString());  // db1, "Board 2", fed from the consumer unit
+        const int first = session.revision();
+        QCOMPARE(session.editObservation("o1", "itemCode", "NO-SUCH-ITEM"),
+                 QStringLiteral("Price-book item: no item \"NO-SUCH-ITEM\" in the price book; expected one of its codes, or nothing"));
+        QCOMPARE(session.editObservation("o1", "itemQuantity", "0"),
+                 QStringLiteral("Quantity: expected above 0 and at most 100000, got 0"));
+        QCOMPARE(session.editObservation("o1", "itemQuantity", "two"), QStringLiteral("Quantity: expected a number above 0, got \"two\""));
+        QCOMPARE(session.editObservation("o1", "code", "C4"), QStringLiteral("Code: expected C1, C2, C3 or FI, got \"C4\""));
+        QCOMPARE(session.editObservation("o1", "text", "  "), QStringLiteral("Observation: expected the inspector's words, got nothing"));
+        QVERIFY(session.editObservation("o1", "board", "nowhere").startsWith(QStringLiteral("Board: no board \"nowhere\"")));
+        QVERIFY(session.editObservation("o9", "text", "x").contains(QStringLiteral("no observation o9")));
+        QCOMPARE(session.revision(), first);
+        // Moved to the new board, the circuit of the consumer unit is let go; then a circuit of
+        // another board is refused, naming both boards.
+        QCOMPARE(session.editObservation("o1", "board", "db1"), QString());
+        QCOMPARE(observation_row(session, "o1").value("circuitId").toString(), QString());
+        QCOMPARE(observation_row(session, "o1").value("location").toString(), QStringLiteral("Board 2"));
+        QCOMPARE(session.editObservation("o1", "circuit", "c1"),
+                 QStringLiteral("Circuit: circuit 1 (c1) is on board cu (Consumer unit), not on board db1 (Board 2); "
+                                "choose the board first, or a circuit of that board"));
+        QCOMPARE(session.revision(), first + 1);
+    }
+
+    void an_item_code_on_a_c2_observation_makes_a_remedy_option_costed_from_that_item() {
+        test::TestWorkspace fixture;
+        QVERIFY2(fixture.workspace, fixture.error.c_str());
+        JobSession session;
+        QVERIFY(open_job(session, QStringLiteral("DT-102")));
+        QCOMPARE(session.editObservation("o1", "code", "C2"), QString());
+        QVERIFY(recorded_item_option(session, "o1").isEmpty());  // no item: nothing to price
+        QCOMPARE(session.editObservation("o1", "itemCode", "SOCKET-DBL-REPLACE"), QString());
+        const QVariantMap one = recorded_item_option(session, "o1");
+        QVERIFY2(!one.isEmpty(), "no priced option for the observation's item");
+        QVERIFY(one.value("priced").toBool());
+        QCOMPARE(one.value("title").toString(), QStringLiteral("No labels at the consumer unit"));
+        QCOMPARE(session.editObservation("o1", "itemQuantity", "2"), QString());
+        const QVariantMap two = recorded_item_option(session, "o1");
+        // One more of the item adds its cost before markup and VAT: £8.90 material plus 0.5 h at
+        // £48.00 an hour = £32.90 (figures from pricebook-demo/items.csv, SOCKET-DBL-REPLACE, and
+        // settings.json: invented demo prices; a line costs material plus labour hours times the
+        // labour rate, common practice).
+        QCOMPARE(two.value("costPence").toLongLong() - one.value("costPence").toLongLong(), 3290LL);
+        // Cleared, the option leaves.
+        QCOMPARE(session.editObservation("o1", "itemCode", ""), QString());
+        QVERIFY(recorded_item_option(session, "o1").isEmpty());
     }
 };
 
