@@ -3,6 +3,7 @@
 // prediction goes into the changed copy as the electrode's RA (in the season it was measured,
 // so the rules apply the same seasonal factor), and every option carries the re-measurement.
 #include <algorithm>
+#include <string_view>
 
 #include "planner/remedies/electrode_prediction.hpp"
 #include "planner/remedies/model_edits.hpp"
@@ -17,6 +18,9 @@ double season_factor_for(const model::Electrode& electrode, const RemedySettings
 }
 
 namespace {
+
+// The rule whose "note" case says RA is above the ideal target (planner/rules/checks/electrode_resistance.cpp).
+constexpr std::string_view ideal_target_rule = "electrode.resistance";
 
 void add_rods(model::Installation& installation, int total_rods, const RodSpec& rods, double predicted_ohms) {
     if (!installation.electrode) return;
@@ -41,6 +45,13 @@ std::vector<Option> propose_electrodes(const ProposalContext& context) {
     if (context.installation.supply.earthing != model::EarthingArrangement::tt) return options;
     const model::Electrode& electrode = *context.installation.electrode;
     auto targets = detail::targets_for(*entry, context.findings, {});
+    // Between the ideal target and the stability threshold the rules note RA only (code "note"):
+    // nothing urgent, but the ideal plan aims for the target, so the ideal rod count is offered
+    // for that note as well. With nothing but the note to clear, the stability count is not
+    // offered (the electrode is already stable).
+    const bool only_ideal_target = targets.empty();
+    for (const auto& finding : context.findings)
+        if (finding.code == rules::Code::note && finding.rule == ideal_target_rule) targets.push_back(finding.id);
     if (targets.empty()) return options;
     RodSpec rods;
     rods.length_m = entry->parameter("rod_length_m", 1.2);
@@ -81,7 +92,7 @@ std::vector<Option> propose_electrodes(const ProposalContext& context) {
         option.apply = [total, rods, predicted](model::Installation& copy) { add_rods(copy, total, rods, predicted); };
         return option;
     };
-    if (n_stability > 0 && n_stability != n_ideal) options.push_back(make(n_stability, stability_prediction, "stability"));
+    if (n_stability > 0 && n_stability != n_ideal && !only_ideal_target) options.push_back(make(n_stability, stability_prediction, "stability"));
     if (n_ideal > 0) options.push_back(make(n_ideal, ideal_prediction, "ideal"));
     return options;
 }

@@ -4,6 +4,7 @@
 #include <catch2/catch.hpp>
 
 #include "planner/remedies/electrode_prediction.hpp"
+#include "planner/remedies/plans.hpp"
 #include "planner/remedies/proposals.hpp"
 #include "tests/planner/remedies/remedy_fixtures.hpp"
 
@@ -75,4 +76,32 @@ TEST_CASE("remedies electrodes: smallest count for the worst-season threshold an
     // Every electrode option carries the re-measurement.
     for (const auto& option : options)
         CHECK(std::any_of(option.bill.begin(), option.bill.end(), [](const auto& l) { return l.item_code == "TEST-RA-VISIT"; }));
+}
+
+TEST_CASE("remedies electrodes: RA between the ideal target and the stability threshold gets the ideal count, and only the ideal plan takes it",
+          "[remedies][electrode][plans]") {
+    // RA 150 ohms measured in August (factor 1.0 in the shipped profile): stable (<= 200, Table 41.5
+    // note, read) but above the 100 ohm target (common practice), which the rules only note.
+    // By hand (BS 7430, read): rho = 150 / ((ln(8 x 1.2 / 0.016) - 1) / (2 pi 1.2)) = 209.6 ohm m;
+    // one added rod 2.4 m away: alpha = 209.6 / (2 pi x 150 x 2.4) = 0.0927,
+    // R = 150 (1 + 1.00 x 0.0927) / 2 = 81.9 ohm <= 100 (lambda 1.00 for two rods, from memory).
+    auto installation = remedy_test::tt_cottage_without_rcd();
+    installation.electrode = one_rod(150.0);
+    installation.electrode->measured_on = Date{2026, 8, 10};
+    auto analysis = remedies::analyse(installation, remedy_test::shipped_rules(), remedy_test::demo_price_book(),
+                                      remedy_test::shipped_settings());
+    std::vector<const remedies::Option*> electrode_options;
+    for (const auto& option : analysis.options)
+        if (option.kind == "electrodes-add") electrode_options.push_back(&option);
+    REQUIRE(electrode_options.size() == 1);  // no "stability" count: the electrode is already stable
+    const auto& option = *electrode_options.front();
+    CHECK(option.id == "electrodes-add-1@earth");
+    CHECK_THAT(option.title, Catch::Contains("ideal target"));
+    CHECK(remedy_test::contains(option.verification.cleared, "electrode.resistance@installation"));
+    CHECK_FALSE(option.ranked_last);
+
+    const auto ideal = remedies::ideal_plan(*analysis.verifier, analysis.options, analysis.settings);
+    const auto cheapest = remedies::least_cost_plan(*analysis.verifier, analysis.options, analysis.settings);
+    CHECK(remedy_test::contains(ideal.option_ids, "electrodes-add-1@earth"));
+    CHECK_FALSE(remedy_test::contains(cheapest.option_ids, "electrodes-add-1@earth"));  // a note is not urgent
 }
