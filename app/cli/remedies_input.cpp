@@ -77,8 +77,8 @@ std::optional<int> load_remedy_inputs(const ParsedArgs& args, CommandContext& co
 std::optional<int> run_remedy_analysis(const RemedyInputs& inputs, CommandContext& context, const std::string& command,
                                        remedies::Analysis& analysis) {
     const rules::RulesProfile& profile = inputs.profile;
-    remedies::Assessor assess = [&profile](const model::Installation& installation) {
-        return rules::assess(installation, profile);
+    remedies::Assessor assess = [&profile](const model::Installation& installation, rules::FindingDetail detail) {
+        return rules::assess(installation, profile, {detail});
     };
     analysis = remedies::analyse(inputs.installation, assess, inputs.book, remedies::settings_from_profile(profile));
     if (!analysis.pricing_problems.empty()) {

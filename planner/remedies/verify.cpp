@@ -203,7 +203,7 @@ Verifier::~Verifier() = default;
 
 Verification Verifier::verify_whole(const Option& option) {
     const model::Installation copy = applied_copy(installation_, option);
-    return compare_findings(baseline_, assess_(copy), option.targets);
+    return compare_findings(baseline_, assess_(copy, rules::FindingDetail::verdict), option.targets);
 }
 
 Verification Verifier::verify(const Option& option) {
@@ -221,14 +221,14 @@ Verification Verifier::verify(const Option& option) {
     const std::string key = view_key(plan.keep);
     model::Installation view = view_of(installation_, plan.keep);
     auto cached = view_baselines_.find(key);
-    if (cached == view_baselines_.end()) cached = view_baselines_.emplace(key, assess_(view)).first;
+    if (cached == view_baselines_.end()) cached = view_baselines_.emplace(key, assess_(view, rules::FindingDetail::verdict)).first;
     const std::vector<rules::Finding>& before = cached->second;
     // After: the option applied to a copy of that same view; it must have changed only the
     // boards it touches (and those below), or the whole installation is assessed instead.
     model::Installation changed = view;
     if (option.apply) option.apply(changed);
     if (!changes_confined(view, changed, plan.changeable)) return verify_whole(option);
-    const std::vector<rules::Finding> after = assess_(changed);
+    const std::vector<rules::Finding> after = assess_(changed, rules::FindingDetail::verdict);
     Verification v = compare_findings(before, after, option.targets);
     // An installation-wide finding that comes or goes in the view may rest on boards left out
     // (RA not recorded is there if any circuit anywhere has an RCD): the whole decides.

@@ -18,6 +18,7 @@
 #include <memory>
 #include <unordered_map>
 #include <string>
+#include <type_traits>
 #include <vector>
 
 #include "planner/model/installation.hpp"
@@ -26,8 +27,42 @@
 
 namespace mendwright::remedies {
 
-// The rules, as the caller configured them (profile and all).
-using Assessor = std::function<std::vector<rules::Finding>(const model::Installation&)>;
+// The rules, as the caller configured them (profile and all). Made from a function of the
+// installation and the rules::FindingDetail wanted, verification asks for verdicts only (no
+// words: titles, places, inputs and explanations are never compared), which is most of the time
+// the rules take on a large installation; made from a function of the installation alone, every
+// assessment is a full one (same verdicts, slower).
+//
+//   remedies::Assessor assess = [&profile](const model::Installation& i, rules::FindingDetail detail) {
+//       return rules::assess(i, profile, {detail});
+//   };
+class Assessor {
+public:
+    using Function = std::function<std::vector<rules::Finding>(const model::Installation&, rules::FindingDetail)>;
+
+    Assessor() = default;
+    template <typename F>
+        requires(!std::is_same_v<std::remove_cvref_t<F>, Assessor> &&
+                 std::is_invocable_r_v<std::vector<rules::Finding>, const F&, const model::Installation&, rules::FindingDetail>)
+    Assessor(F function) : function_(std::move(function)) {}  // NOLINT: converts like std::function
+    template <typename F>
+        requires(!std::is_same_v<std::remove_cvref_t<F>, Assessor> &&
+                 !std::is_invocable_v<const F&, const model::Installation&, rules::FindingDetail> &&
+                 std::is_invocable_r_v<std::vector<rules::Finding>, const F&, const model::Installation&>)
+    Assessor(F function)  // NOLINT: converts like std::function
+        : function_([full = std::move(function)](const model::Installation& installation, rules::FindingDetail) {
+              return full(installation);
+          }) {}
+
+    std::vector<rules::Finding> operator()(const model::Installation& installation,
+                                           rules::FindingDetail detail = rules::FindingDetail::full) const {
+        return function_(installation, detail);
+    }
+    explicit operator bool() const { return static_cast<bool>(function_); }
+
+private:
+    Function function_;
+};
 
 // Compares findings before and after by id. `targets` are the ids the option aimed at.
 Verification compare_findings(const std::vector<rules::Finding>& before, const std::vector<rules::Finding>& after,
@@ -42,6 +77,8 @@ public:
     Verifier(const Verifier&) = delete;
     Verifier& operator=(const Verifier&) = delete;
 
+    // The surveyed installation's findings in full (proposals, rankings and the quote read their
+    // words); every other assessment the Verifier makes asks for verdicts only.
     [[nodiscard]] const std::vector<rules::Finding>& baseline() const { return baseline_; }
     [[nodiscard]] const model::Installation& installation() const { return installation_; }
 
@@ -52,14 +89,18 @@ public:
 
     // Every option of a plan applied to one copy, in the order given; the rules run on it.
     [[nodiscard]] model::Installation combined_copy(const std::vector<const Option*>& options) const;
-    std::vector<rules::Finding> assess(const model::Installation& installation) const { return assess_(installation); }
+    // The rules on any installation; FindingDetail::verdict where only ids and codes are read.
+    std::vector<rules::Finding> assess(const model::Installation& installation,
+                                       rules::FindingDetail detail = rules::FindingDetail::full) const {
+        return assess_(installation, detail);
+    }
 
 private:
     const model::Installation& installation_;
     Assessor assess_;
     std::vector<rules::Finding> baseline_;
     std::unordered_map<std::string, std::string> baseline_boards_;  // finding id -> its board (empty: installation-wide)
-    std::map<std::string, std::vector<rules::Finding>> view_baselines_;  // by view key
+    std::map<std::string, std::vector<rules::Finding>> view_baselines_;  // by view key; verdicts only
     std::unique_ptr<BoardTree> tree_;  // the surveyed installation's board tree, walked once
 };
 

@@ -40,8 +40,8 @@ DueDate due_date_for(const model::JobFacts& job, const RulesProfile& profile) {
     return DueDate{std::nullopt, profile.due_dates.default_text, ""};
 }
 
-std::vector<Finding> assess(const model::Installation& installation, const RulesProfile& profile) {
-    const AssessContext context(installation, profile);
+std::vector<Finding> assess(const model::Installation& installation, const RulesProfile& profile, AssessOptions options) {
+    const AssessContext context(installation, profile, options.detail);
     // Each rule's findings stay where the rule put them until they are moved, once, into their
     // place in the order below (assess runs hundreds of times per remedy search).
     std::vector<std::vector<Finding>> by_rule;

@@ -17,7 +17,9 @@
 
 namespace mendwright::rules {
 
-std::vector<Finding> assess(const model::Installation& installation, const RulesProfile& profile);
+// `options.detail == FindingDetail::verdict` leaves the findings' words empty (see finding.hpp).
+std::vector<Finding> assess(const model::Installation& installation, const RulesProfile& profile,
+                            AssessOptions options = {});
 
 struct CodeSummary {
     int c1 = 0, c2 = 0, c3 = 0, fi = 0, note = 0;

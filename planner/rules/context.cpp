@@ -16,8 +16,8 @@ const model::Device* board_device(const model::Board& board, const std::string& 
 
 }  // namespace
 
-AssessContext::AssessContext(const model::Installation& installation, const RulesProfile& profile)
-    : installation_(installation), profile_(profile) {
+AssessContext::AssessContext(const model::Installation& installation, const RulesProfile& profile, FindingDetail detail)
+    : installation_(installation), profile_(profile), detail_(detail) {
     // Which circuit feeds each board, looked up once (model::feeding_circuit scans every circuit
     // on each call; assess runs hundreds of times per remedy search).
     std::unordered_map<std::string, model::CircuitRef> feeder_of;
@@ -120,6 +120,12 @@ Finding AssessContext::new_finding(std::string_view rule_id, std::string_view ca
     finding.rule = std::string(rule_id);
     finding.id = finding.rule + "@" + location_key;
     finding.code = rule_case.code;
+    if (!with_text()) {
+        if (board) finding.board_id = board->id;
+        if (circuit) finding.circuit_id = circuit->id;
+        if (device) finding.device_id = device->id;
+        return finding;
+    }
     finding.clause = rule_case.clause;
     if (board) {
         finding.board_id = board->id;

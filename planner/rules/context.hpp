@@ -30,13 +30,19 @@ struct CircuitEntry {
 
 class AssessContext {
 public:
-    AssessContext(const model::Installation& installation, const RulesProfile& profile);
+    AssessContext(const model::Installation& installation, const RulesProfile& profile,
+                  FindingDetail detail = FindingDetail::full);
 
     [[nodiscard]] const model::Installation& installation() const { return installation_; }
     [[nodiscard]] const RulesProfile& profile() const { return profile_; }
 
     // Every circuit, board by board in document order.
     [[nodiscard]] const std::vector<CircuitEntry>& circuits() const { return circuits_; }
+
+    // Whether rules fill in the words of a finding (title, location, clause, inputs,
+    // explanation); false when only the verdict is wanted (FindingDetail::verdict). Rules
+    // decide whether there is a finding, and its id and code, the same way either way.
+    [[nodiscard]] bool with_text() const { return detail_ == FindingDetail::full; }
 
     [[nodiscard]] bool is_tt() const;
     [[nodiscard]] bool is_dwelling() const;
@@ -56,7 +62,8 @@ public:
     [[nodiscard]] std::optional<double> required_disconnection_time_s(const CircuitEntry& entry) const;
 
     // A finding of `rule_id` / `case_name` with id "<rule>@<location_key>", its code and clause
-    // from the profile, and its place filled in from whichever of board/circuit/device is given.
+    // from the profile, and its place filled in from whichever of board/circuit/device is given
+    // (clause and readable place only with_text()).
     [[nodiscard]] Finding new_finding(std::string_view rule_id, std::string_view case_name, const std::string& location_key,
                                       const model::Board* board, const model::Circuit* circuit,
                                       const model::Device* device) const;
@@ -64,6 +71,7 @@ public:
 private:
     const model::Installation& installation_;
     const RulesProfile& profile_;
+    FindingDetail detail_;
     std::vector<CircuitEntry> circuits_;
 };
 

@@ -48,4 +48,15 @@ struct Finding {
     [[nodiscard]] bool urgent() const { return is_urgent(code); }
 };
 
+// How much of each finding an assessment fills in. `verdict` is for re-verification, which
+// runs the rules hundreds of times and compares findings by id and code only: the findings,
+// their order, ids, rule, code, board/circuit/device ids, origin, due date and price-book item
+// are the same as in `full`, while the words people read (title, location, clause, inputs,
+// explanation) are left empty.
+enum class FindingDetail { full, verdict };
+
+struct AssessOptions {
+    FindingDetail detail = FindingDetail::full;
+};
+
 }  // namespace mendwright::rules

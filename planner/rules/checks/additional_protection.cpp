@@ -39,15 +39,19 @@ std::vector<Finding> additional_protection(const AssessContext& context) {
         const auto& circuit = *entry.circuit;
         const bool sockets = circuit.use == model::CircuitUse::sockets &&
                              circuit.device.rating_amps <= limits.socket_outlet_max_amps;
+        // The words only where the finding's text is wanted (see AssessContext::with_text).
+        const bool text = context.with_text();
         std::vector<Reason> reasons;
         if (circuit.use == model::CircuitUse::outdoor || (sockets && circuit.supplies_outdoor_equipment))
-            reasons.push_back({"outdoor", "may supply equipment used outdoors"});
+            reasons.push_back({"outdoor", text ? "may supply equipment used outdoors" : ""});
         if (sockets)
-            reasons.push_back({"sockets", "socket-outlets of up to " + number_text(limits.socket_outlet_max_amps) + " A"});
+            reasons.push_back({"sockets", text ? "socket-outlets of up to " + number_text(limits.socket_outlet_max_amps) + " A"
+                                               : std::string()});
         if (circuit.use == model::CircuitUse::lighting && context.is_dwelling())
-            reasons.push_back({"lighting", "lighting in a dwelling"});
+            reasons.push_back({"lighting", text ? "lighting in a dwelling" : ""});
         if (circuit.concealed_in_wall)
-            reasons.push_back({"concealed_cable", "cables concealed in a wall at less than 50 mm without other protection"});
+            reasons.push_back({"concealed_cable",
+                               text ? "cables concealed in a wall at less than 50 mm without other protection" : ""});
         if (reasons.empty()) continue;
         if (additional_protection_rcd(context, entry)) continue;
 
@@ -60,25 +64,27 @@ std::vector<Finding> additional_protection(const AssessContext& context) {
 
         Finding finding = context.new_finding(rule_id, chosen->case_name, "circuit:" + circuit.id, entry.board, &circuit,
                                               &circuit.device);
-        finding.title = "No additional protection by a " + number_text(limits.additional_protection_max_idn_amps * 1000.0) +
-                        " mA RCD";
-        std::string why;
-        for (const auto& reason : reasons) why += (why.empty() ? "" : "; ") + reason.words;
-        std::string above = "none";
-        if (!entry.residual_current_devices.empty()) {
-            above.clear();
-            for (const auto& ref : entry.residual_current_devices) {
-                above += (above.empty() ? "" : ", ") + AssessContext::device_text(*ref.device);
-                if (ref.device->residual_current_amps)
-                    above += " " + number_text(*ref.device->residual_current_amps * 1000.0) + " mA";
-                if (ref.device->delay == model::RcdDelay::time_delayed) above += " S-type";
+        if (context.with_text()) {
+            finding.title = "No additional protection by a " + number_text(limits.additional_protection_max_idn_amps * 1000.0) +
+                            " mA RCD";
+            std::string why;
+            for (const auto& reason : reasons) why += (why.empty() ? "" : "; ") + reason.words;
+            std::string above = "none";
+            if (!entry.residual_current_devices.empty()) {
+                above.clear();
+                for (const auto& ref : entry.residual_current_devices) {
+                    above += (above.empty() ? "" : ", ") + AssessContext::device_text(*ref.device);
+                    if (ref.device->residual_current_amps)
+                        above += " " + number_text(*ref.device->residual_current_amps * 1000.0) + " mA";
+                    if (ref.device->delay == model::RcdDelay::time_delayed) above += " S-type";
+                }
             }
+            finding.inputs = {text_input("required because", why), text_input("RCDs above", above),
+                              number_input("IΔn needed at most", limits.additional_protection_max_idn_amps, "A", 3)};
+            finding.explanation = "Required for this circuit (" + why + "); no RCD of IΔn ≤ " +
+                                  number_text(limits.additional_protection_max_idn_amps * 1000.0) +
+                                  " mA without time delay is above it (RCDs above: " + above + ").";
         }
-        finding.inputs = {text_input("required because", why), text_input("RCDs above", above),
-                          number_input("IΔn needed at most", limits.additional_protection_max_idn_amps, "A", 3)};
-        finding.explanation = "Required for this circuit (" + why + "); no RCD of IΔn ≤ " +
-                              number_text(limits.additional_protection_max_idn_amps * 1000.0) +
-                              " mA without time delay is above it (RCDs above: " + above + ").";
         findings.push_back(std::move(finding));
     }
     return findings;

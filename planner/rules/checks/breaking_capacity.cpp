@@ -72,12 +72,14 @@ std::vector<Finding> breaking_capacity(const AssessContext& context) {
         if (pfc_ka <= effective_ka) return;
         Finding finding = context.new_finding("device.breaking_capacity", "below_fault_current", "device:" + device.id, &board,
                                               circuit, &device);
-        finding.title = "Breaking capacity below the prospective fault current";
-        finding.inputs = {text_input("device", device_rating_text(device)), number_input("breaking capacity", own_ka, "kA"),
-                          number_input("prospective fault current", pfc_ka, "kA"),
-                          text_input("supply fuse", supply.supply_fuse_type + " " + number_text(supply.supply_fuse_rating_amps) + " A")};
-        finding.explanation = "Breaking capacity " + number_text(effective_ka) + " kA < prospective fault current " +
-                              number_text(pfc_ka) + " kA; " + conditional_words + ".";
+        if (context.with_text()) {
+            finding.title = "Breaking capacity below the prospective fault current";
+            finding.inputs = {text_input("device", device_rating_text(device)), number_input("breaking capacity", own_ka, "kA"),
+                              number_input("prospective fault current", pfc_ka, "kA"),
+                              text_input("supply fuse", supply.supply_fuse_type + " " + number_text(supply.supply_fuse_rating_amps) + " A")};
+            finding.explanation = "Breaking capacity " + number_text(effective_ka) + " kA < prospective fault current " +
+                                  number_text(pfc_ka) + " kA; " + conditional_words + ".";
+        }
         findings.push_back(std::move(finding));
     };
     for (const auto& board : context.installation().boards) {

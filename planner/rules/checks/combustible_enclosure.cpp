@@ -12,10 +12,12 @@ std::vector<Finding> combustible_enclosure(const AssessContext& context) {
         if (board.new_work || board.enclosure != model::EnclosureMaterial::combustible) continue;
         Finding finding = context.new_finding("board.combustible_enclosure", "dwelling", "board:" + board.id, &board, nullptr,
                                               nullptr);
-        finding.title = "Board in a dwelling with a combustible enclosure";
-        finding.inputs = {{"enclosure", "combustible", ""}};
-        finding.explanation = "The enclosure is recorded as combustible (e.g. plastic) and the premises are a dwelling, "
-                              "where a non-combustible enclosure or cabinet is required.";
+        if (context.with_text()) {
+            finding.title = "Board in a dwelling with a combustible enclosure";
+            finding.inputs = {{"enclosure", "combustible", ""}};
+            finding.explanation = "The enclosure is recorded as combustible (e.g. plastic) and the premises are a dwelling, "
+                                  "where a non-combustible enclosure or cabinet is required.";
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

@@ -15,18 +15,22 @@ std::vector<Finding> electrode_resistance(const AssessContext& context) {
 
     if (*ra_ohms > limits.stability_limit_ohms) {
         Finding finding = context.new_finding(rule_id, "above_stability_limit", "installation", nullptr, nullptr, nullptr);
-        finding.title = "Earth electrode resistance above " + number_text(limits.stability_limit_ohms) + " Ω: may not be stable";
-        finding.inputs = {number_input("RA", *ra_ohms, "Ω"), number_input("stability threshold", limits.stability_limit_ohms, "Ω")};
-        finding.explanation = "RA " + number_text(*ra_ohms) + " Ω > " + number_text(limits.stability_limit_ohms) +
-                              " Ω: a resistance this high may not be stable as the soil dries or freezes.";
+        if (context.with_text()) {
+            finding.title = "Earth electrode resistance above " + number_text(limits.stability_limit_ohms) + " Ω: may not be stable";
+            finding.inputs = {number_input("RA", *ra_ohms, "Ω"), number_input("stability threshold", limits.stability_limit_ohms, "Ω")};
+            finding.explanation = "RA " + number_text(*ra_ohms) + " Ω > " + number_text(limits.stability_limit_ohms) +
+                                  " Ω: a resistance this high may not be stable as the soil dries or freezes.";
+        }
         findings.push_back(std::move(finding));
     } else if (*ra_ohms > limits.target_ohms) {
         Finding finding = context.new_finding(rule_id, "above_target", "installation", nullptr, nullptr, nullptr);
-        finding.title = "Earth electrode resistance above the " + number_text(limits.target_ohms) + " Ω aimed for";
-        finding.inputs = {number_input("RA", *ra_ohms, "Ω"), number_input("target", limits.target_ohms, "Ω")};
-        finding.explanation = "RA " + number_text(*ra_ohms) + " Ω > " + number_text(limits.target_ohms) + " Ω target (≤ " +
-                              number_text(limits.stability_limit_ohms) +
-                              " Ω stability threshold): acceptable, with little margin for a dry season.";
+        if (context.with_text()) {
+            finding.title = "Earth electrode resistance above the " + number_text(limits.target_ohms) + " Ω aimed for";
+            finding.inputs = {number_input("RA", *ra_ohms, "Ω"), number_input("target", limits.target_ohms, "Ω")};
+            finding.explanation = "RA " + number_text(*ra_ohms) + " Ω > " + number_text(limits.target_ohms) + " Ω target (≤ " +
+                                  number_text(limits.stability_limit_ohms) +
+                                  " Ω stability threshold): acceptable, with little margin for a dry season.";
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

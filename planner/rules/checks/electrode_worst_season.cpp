@@ -44,15 +44,17 @@ std::vector<Finding> electrode_worst_season(const AssessContext& context) {
 
         Finding finding = context.new_finding("electrode.worst_season", "fails_when_dry", "device:" + rcd->device->id,
                                               rcd->board, rcd->circuit, rcd->device);
-        finding.title = "Earth electrode meets the touch-voltage limit only in a wet season";
-        finding.inputs = {number_input("RA measured", *ra_ohms, "Ω"), number_input("seasonal factor (assumption)", factor, "", 2),
-                          number_input("RA worst season", worst_ohms, "Ω"), number_input("IΔn", idn_amps, "A", 3),
-                          number_input("touch-voltage limit", limit_volts, "V")};
-        finding.explanation = "RA " + number_text(*ra_ohms) + " Ω (" + when + ") × seasonal factor " + number_text(factor) +
-                              " = " + number_text(worst_ohms, 1) + " Ω; × IΔn " + number_text(idn_amps, 3) + " A = " +
-                              number_text(worst_volts, 1) + " V > " + number_text(limit_volts) + " V (measured: " +
-                              number_text(measured_volts, 1) + " V ≤ " + number_text(limit_volts) + " V). " +
-                              profile.electrode.seasonal_factor_basis;
+        if (context.with_text()) {
+            finding.title = "Earth electrode meets the touch-voltage limit only in a wet season";
+            finding.inputs = {number_input("RA measured", *ra_ohms, "Ω"), number_input("seasonal factor (assumption)", factor, "", 2),
+                              number_input("RA worst season", worst_ohms, "Ω"), number_input("IΔn", idn_amps, "A", 3),
+                              number_input("touch-voltage limit", limit_volts, "V")};
+            finding.explanation = "RA " + number_text(*ra_ohms) + " Ω (" + when + ") × seasonal factor " + number_text(factor) +
+                                  " = " + number_text(worst_ohms, 1) + " Ω; × IΔn " + number_text(idn_amps, 3) + " A = " +
+                                  number_text(worst_volts, 1) + " V > " + number_text(limit_volts) + " V (measured: " +
+                                  number_text(measured_volts, 1) + " V ≤ " + number_text(limit_volts) + " V). " +
+                                  profile.electrode.seasonal_factor_basis;
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

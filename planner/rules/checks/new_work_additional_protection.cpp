@@ -35,10 +35,12 @@ std::vector<Finding> new_work_additional_protection(const AssessContext& context
         if (additional_protection_rcd(context, entry)) continue;
         Finding finding = context.new_finding("new_work.additional_protection", case_name, "circuit:" + circuit.id,
                                               entry.board, &circuit, &circuit.device);
-        finding.title = "New board: circuit without a " + number_text(max_idn_amps * 1000.0) + " mA RCD";
-        finding.inputs = {text_input("circuit", why), number_input("IΔn needed at most", max_idn_amps, "A", 3)};
-        finding.explanation = "The board is new work and this is " + why + "; no RCD of IΔn ≤ " +
-                              number_text(max_idn_amps * 1000.0) + " mA without time delay is above it.";
+        if (context.with_text()) {
+            finding.title = "New board: circuit without a " + number_text(max_idn_amps * 1000.0) + " mA RCD";
+            finding.inputs = {text_input("circuit", why), number_input("IΔn needed at most", max_idn_amps, "A", 3)};
+            finding.explanation = "The board is new work and this is " + why + "; no RCD of IΔn ≤ " +
+                                  number_text(max_idn_amps * 1000.0) + " mA without time delay is above it.";
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

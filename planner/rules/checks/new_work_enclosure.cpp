@@ -11,10 +11,12 @@ std::vector<Finding> new_work_enclosure(const AssessContext& context) {
         if (!board.new_work || board.enclosure != model::EnclosureMaterial::combustible) continue;
         Finding finding = context.new_finding("new_work.enclosure", "combustible_in_dwelling", "board:" + board.id, &board,
                                               nullptr, nullptr);
-        finding.title = "New board in a dwelling with a combustible enclosure";
-        finding.inputs = {{"enclosure", "combustible", ""}};
-        finding.explanation = "The board is new work in a dwelling and its enclosure is combustible; a non-combustible "
-                              "enclosure or cabinet is required.";
+        if (context.with_text()) {
+            finding.title = "New board in a dwelling with a combustible enclosure";
+            finding.inputs = {{"enclosure", "combustible", ""}};
+            finding.explanation = "The board is new work in a dwelling and its enclosure is combustible; a non-combustible "
+                                  "enclosure or cabinet is required.";
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

@@ -14,10 +14,12 @@ std::vector<Finding> new_work_surge_protection(const AssessContext& context) {
         if (!board.new_work || board.surge_protection_fitted) continue;
         Finding finding = context.new_finding("new_work.surge_protection", "not_fitted", "board:" + board.id, &board, nullptr,
                                               nullptr);
-        finding.title = "New board without surge protection";
-        finding.inputs = {{"surge protection fitted", "no", ""}};
-        finding.explanation = "The board is new work and no surge protective device is recorded; fit one unless a risk "
-                              "assessment under 443.4 shows it is not needed.";
+        if (context.with_text()) {
+            finding.title = "New board without surge protection";
+            finding.inputs = {{"surge protection fitted", "no", ""}};
+            finding.explanation = "The board is new work and no surge protective device is recorded; fit one unless a risk "
+                                  "assessment under 443.4 shows it is not needed.";
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

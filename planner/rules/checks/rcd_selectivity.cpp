@@ -33,22 +33,24 @@ std::vector<Finding> rcd_selectivity(const AssessContext& context) {
                 Finding finding = context.new_finding("rcd.selectivity", "not_selective",
                                                       "device:" + upper.device->id + ">" + lower.device->id, upper.board,
                                                       upper.circuit, upper.device);
-                finding.location = AssessContext::board_text(*upper.board) + " / " + AssessContext::device_text(*upper.device) +
-                                   " above " + AssessContext::device_text(*lower.device);
-                finding.title = "RCDs in series not selective: one fault may trip both";
-                const std::string upper_text = number_text(upper_idn * 1000.0) + " mA" + (delayed ? " S-type" : " general");
-                const std::string lower_text = number_text(lower_idn * 1000.0) + " mA" +
-                                               (lower.device->delay == model::RcdDelay::time_delayed ? " S-type" : " general");
-                finding.inputs = {text_input("upstream", AssessContext::device_text(*upper.device) + " " + upper_text),
-                                  text_input("downstream", AssessContext::device_text(*lower.device) + " " + lower_text),
-                                  number_input("ratio needed", ratio, "", 2)};
-                std::string why;
-                if (!delayed) why = "upstream device is not time-delayed (S-type)";
-                if (!enough)
-                    why += (why.empty() ? "" : "; ") + std::string("upstream IΔn ") + number_text(upper_idn * 1000.0) +
-                           " mA < " + number_text(ratio) + " × " + number_text(lower_idn * 1000.0) + " mA = " +
-                           number_text(needed_amps * 1000.0) + " mA";
-                finding.explanation = "Upstream " + upper_text + ", downstream " + lower_text + ": " + why + ".";
+                if (context.with_text()) {
+                    finding.location = AssessContext::board_text(*upper.board) + " / " + AssessContext::device_text(*upper.device) +
+                                       " above " + AssessContext::device_text(*lower.device);
+                    finding.title = "RCDs in series not selective: one fault may trip both";
+                    const std::string upper_text = number_text(upper_idn * 1000.0) + " mA" + (delayed ? " S-type" : " general");
+                    const std::string lower_text = number_text(lower_idn * 1000.0) + " mA" +
+                                                   (lower.device->delay == model::RcdDelay::time_delayed ? " S-type" : " general");
+                    finding.inputs = {text_input("upstream", AssessContext::device_text(*upper.device) + " " + upper_text),
+                                      text_input("downstream", AssessContext::device_text(*lower.device) + " " + lower_text),
+                                      number_input("ratio needed", ratio, "", 2)};
+                    std::string why;
+                    if (!delayed) why = "upstream device is not time-delayed (S-type)";
+                    if (!enough)
+                        why += (why.empty() ? "" : "; ") + std::string("upstream IΔn ") + number_text(upper_idn * 1000.0) +
+                               " mA < " + number_text(ratio) + " × " + number_text(lower_idn * 1000.0) + " mA = " +
+                               number_text(needed_amps * 1000.0) + " mA";
+                    finding.explanation = "Upstream " + upper_text + ", downstream " + lower_text + ": " + why + ".";
+                }
                 findings.push_back(std::move(finding));
             }
         }

@@ -36,7 +36,8 @@ std::vector<Finding> rcd_standing_leakage(const AssessContext& context) {
                 it->second.order = loads.size();
             }
             it->second.leakage_ma += leakage_ma;
-            it->second.terms.push_back(AssessContext::circuit_text(*entry.circuit) + " " + number_text(leakage_ma) + " mA");
+            if (context.with_text())
+                it->second.terms.push_back(AssessContext::circuit_text(*entry.circuit) + " " + number_text(leakage_ma) + " mA");
         }
     }
     std::vector<const Load*> ordered;
@@ -51,14 +52,16 @@ std::vector<Finding> rcd_standing_leakage(const AssessContext& context) {
         if (load->leakage_ma <= budget_ma * (1.0 + 1e-9)) continue;
         Finding finding = context.new_finding("rcd.standing_leakage", "over_budget", "device:" + device.id, load->ref->board,
                                               load->ref->circuit, &device);
-        finding.title = "Standing leakage on the RCD over its budget: unwanted tripping likely";
-        std::string sum;
-        for (const auto& term : load->terms) sum += (sum.empty() ? "" : " + ") + term;
-        finding.inputs = {number_input("standing leakage", load->leakage_ma, "mA"), number_input("IΔn", idn_ma, "mA"),
-                          number_input("fraction allowed", fraction, "", 2)};
-        finding.explanation = "Standing leakage " + sum + " = " + number_text(load->leakage_ma) + " mA > " +
-                              number_text(fraction * 100.0) + " % × " + number_text(idn_ma) + " mA = " +
-                              number_text(budget_ma) + " mA.";
+        if (context.with_text()) {
+            finding.title = "Standing leakage on the RCD over its budget: unwanted tripping likely";
+            std::string sum;
+            for (const auto& term : load->terms) sum += (sum.empty() ? "" : " + ") + term;
+            finding.inputs = {number_input("standing leakage", load->leakage_ma, "mA"), number_input("IΔn", idn_ma, "mA"),
+                              number_input("fraction allowed", fraction, "", 2)};
+            finding.explanation = "Standing leakage " + sum + " = " + number_text(load->leakage_ma) + " mA > " +
+                                  number_text(fraction * 100.0) + " % × " + number_text(idn_ma) + " mA = " +
+                                  number_text(budget_ma) + " mA.";
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

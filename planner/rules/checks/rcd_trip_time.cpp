@@ -54,23 +54,28 @@ std::vector<Finding> rcd_trip_time(const AssessContext& context) {
         const auto type = delayed ? calc::RcdType::time_delayed : calc::RcdType::general;
         const double max_at_idn_ms = calc::rcd_time_limits(type, 1.0)->max_break_s * 1000.0;
         const double max_at_5idn_ms = calc::rcd_time_limits(type, 5.0)->max_break_s * 1000.0;
-        std::vector<std::string> failures;
-        if (result->at_idn_ms && *result->at_idn_ms > max_at_idn_ms)
-            failures.push_back("at IΔn " + number_text(*result->at_idn_ms) + " ms > " + number_text(max_at_idn_ms) + " ms");
-        if (result->at_5idn_ms && *result->at_5idn_ms > max_at_5idn_ms)
-            failures.push_back("at 5 IΔn " + number_text(*result->at_5idn_ms) + " ms > " + number_text(max_at_5idn_ms) + " ms");
-        if (failures.empty()) continue;
+        const bool slow_at_idn = result->at_idn_ms && *result->at_idn_ms > max_at_idn_ms;
+        const bool slow_at_5idn = result->at_5idn_ms && *result->at_5idn_ms > max_at_5idn_ms;
+        if (!slow_at_idn && !slow_at_5idn) continue;
 
         Finding finding = context.new_finding("rcd.trip_time", "too_slow", "device:" + device.id, result->ref->board,
                                               result->ref->circuit, &device);
-        finding.title = std::string("RCD trips too slowly") + (delayed ? " for an S-type device" : "");
-        if (result->at_idn_ms) finding.inputs.push_back(number_input("trip time at IΔn", *result->at_idn_ms, "ms"));
-        if (result->at_5idn_ms) finding.inputs.push_back(number_input("trip time at 5 IΔn", *result->at_5idn_ms, "ms"));
-        finding.inputs.push_back(text_input("type", delayed ? "S-type (time-delayed)" : "general"));
-        std::string words;
-        for (const auto& failure : failures) words += (words.empty() ? "" : "; ") + failure;
-        finding.explanation = "Slowest trip measured " + words + " (maximum for a " +
-                              (delayed ? std::string("S-type") : std::string("general")) + " device).";
+        if (context.with_text()) {
+            finding.title = std::string("RCD trips too slowly") + (delayed ? " for an S-type device" : "");
+            if (result->at_idn_ms) finding.inputs.push_back(number_input("trip time at IΔn", *result->at_idn_ms, "ms"));
+            if (result->at_5idn_ms) finding.inputs.push_back(number_input("trip time at 5 IΔn", *result->at_5idn_ms, "ms"));
+            finding.inputs.push_back(text_input("type", delayed ? "S-type (time-delayed)" : "general"));
+            std::vector<std::string> failures;
+            if (slow_at_idn)
+                failures.push_back("at IΔn " + number_text(*result->at_idn_ms) + " ms > " + number_text(max_at_idn_ms) + " ms");
+            if (slow_at_5idn)
+                failures.push_back("at 5 IΔn " + number_text(*result->at_5idn_ms) + " ms > " + number_text(max_at_5idn_ms) +
+                                   " ms");
+            std::string words;
+            for (const auto& failure : failures) words += (words.empty() ? "" : "; ") + failure;
+            finding.explanation = "Slowest trip measured " + words + " (maximum for a " +
+                                  (delayed ? std::string("S-type") : std::string("general")) + " device).";
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

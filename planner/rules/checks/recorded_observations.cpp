@@ -26,9 +26,11 @@ std::vector<Finding> recorded_observations(const AssessContext& context) {
         finding.rule = "recorded";
         finding.id = "recorded@observation:" + observation.id;
         finding.code = observation_code(observation.code);
-        finding.title = observation.text;
-        finding.explanation = "Recorded by the inspector: " + observation.text;
-        finding.clause = "as recorded";
+        if (context.with_text()) {
+            finding.title = observation.text;
+            finding.explanation = "Recorded by the inspector: " + observation.text;
+            finding.clause = "as recorded";
+        }
         finding.origin = FindingOrigin::recorded;
         finding.item_code = observation.item_code;
         finding.item_quantity = observation.item_quantity;
@@ -38,13 +40,13 @@ std::vector<Finding> recorded_observations(const AssessContext& context) {
         if (circuit.board) board = circuit.board;
         if (board) {
             finding.board_id = board->id;
-            finding.location = AssessContext::board_text(*board);
+            if (context.with_text()) finding.location = AssessContext::board_text(*board);
         }
         if (circuit.circuit) {
             finding.circuit_id = circuit.circuit->id;
-            finding.location += " / " + AssessContext::circuit_text(*circuit.circuit);
+            if (context.with_text()) finding.location += " / " + AssessContext::circuit_text(*circuit.circuit);
         }
-        if (finding.location.empty()) finding.location = "whole installation";
+        if (finding.location.empty() && context.with_text()) finding.location = "whole installation";
         findings.push_back(std::move(finding));
     }
     return findings;

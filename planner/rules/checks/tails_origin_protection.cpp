@@ -36,16 +36,18 @@ std::vector<Finding> tails_origin_protection(const AssessContext& context) {
 
     const model::Board* origin = model::origin_board(context.installation());
     Finding finding = context.new_finding("tails.origin_protection", case_name, "installation", origin, nullptr, nullptr);
-    finding.location = "meter tails" + (origin ? " to " + AssessContext::board_text(*origin) : std::string());
-    finding.title = "Long meter tails without protection at the origin";
-    finding.inputs = {number_input("tails length", tails.length_m, "m"), text_input("route", route),
-                      text_input("mechanical protection", tails.mechanically_protected ? "yes" : "no"),
-                      text_input("device at the origin", "none"), number_input("longest allowed", max_length_m, "m")};
-    // A limit of 0 m means any length on that route needs protection: say so in words, not "> 0 m".
-    const std::string over_limit = max_length_m > 0.0 ? ") > " + number_text(max_length_m) + " m"
-                                                      : "): no length " + route + " is accepted unprotected";
-    finding.explanation = "Tails " + number_text(tails.length_m) + " m " + route + " (" + protection + over_limit +
-                          ", with no switch-fuse or other device at the meter. " + limits.basis;
+    if (context.with_text()) {
+        finding.location = "meter tails" + (origin ? " to " + AssessContext::board_text(*origin) : std::string());
+        finding.title = "Long meter tails without protection at the origin";
+        finding.inputs = {number_input("tails length", tails.length_m, "m"), text_input("route", route),
+                          text_input("mechanical protection", tails.mechanically_protected ? "yes" : "no"),
+                          text_input("device at the origin", "none"), number_input("longest allowed", max_length_m, "m")};
+        // A limit of 0 m means any length on that route needs protection: say so in words, not "> 0 m".
+        const std::string over_limit = max_length_m > 0.0 ? ") > " + number_text(max_length_m) + " m"
+                                                          : "): no length " + route + " is accepted unprotected";
+        finding.explanation = "Tails " + number_text(tails.length_m) + " m " + route + " (" + protection + over_limit +
+                              ", with no switch-fuse or other device at the meter. " + limits.basis;
+    }
     findings.push_back(std::move(finding));
     return findings;
 }

@@ -34,10 +34,23 @@ std::optional<Finding> without_rcd(const AssessContext& context, const CircuitEn
     const auto& circuit = *entry.circuit;
     const auto& device = circuit.device;
     const double u0_volts = context.installation().supply.u0_volts;
+
+    // Whether there is a finding at all: there is, unless the breaker's instantaneous trip is
+    // shown to open at the fault current the whole measured loop allows (see below).
+    const bool loop_known = circuit.measured_zs_ohms || ra_ohms;
+    const bool loop_partial = !circuit.measured_zs_ohms && !(ra_ohms && circuit.r1_plus_r2_ohms);
+    if (loop_known && !loop_partial && has_breaker_curve(device)) {
+        // The same loop as fault_loop, without its words; Ohm's law: If = U0 / Zloop.
+        const double loop_ohms = circuit.measured_zs_ohms ? *circuit.measured_zs_ohms : *ra_ohms + *circuit.r1_plus_r2_ohms;
+        const double fault_current_amps = u0_volts / loop_ohms;
+        const double ia_amps = calc::instantaneous_trip_band(calc_curve(*device.curve)).upper_multiple * device.rating_amps;
+        if (fault_current_amps >= ia_amps) return std::nullopt;
+    }
+    Finding finding = context.new_finding(rule_id, "no_rcd", "circuit:" + circuit.id, entry.board, &circuit, &device);
+    if (!context.with_text()) return finding;
+
     const std::optional<double> time_s = context.required_disconnection_time_s(entry);
     const auto loop = fault_loop(circuit, ra_ohms);
-
-    Finding finding = context.new_finding(rule_id, "no_rcd", "circuit:" + circuit.id, entry.board, &circuit, &device);
     finding.title = "No RCD: fault protection in a TT system not achieved";
     finding.inputs.push_back(text_input("device", device_rating_text(device)));
     finding.inputs.push_back(number_input("U0", u0_volts, "V"));
@@ -75,7 +88,6 @@ std::optional<Finding> without_rcd(const AssessContext& context, const CircuitEn
     finding.inputs.push_back(number_input("Ia", ia_amps, "A"));
     const std::string ia_text = "Ia " + number_text(ia_amps) + " A (" + number_text(multiple) + " × " +
                                 number_text(device.rating_amps) + " A)";
-    if (fault_current_amps >= ia_amps && !loop->partial) return std::nullopt;
     if (fault_current_amps >= ia_amps) {
         // RA alone already lets enough current flow: the circuit's own R1+R2 can only lower it,
         // so this cannot be called a pass; ask for the measurement.
@@ -113,6 +125,10 @@ std::vector<Finding> tt_fault_protection(const AssessContext& context) {
         const auto& circuit = *entry.circuit;
         Finding finding = context.new_finding(rule_id, "ra_over_limit", "circuit:" + circuit.id, entry.board, &circuit,
                                               rcd->device);
+        if (!context.with_text()) {
+            findings.push_back(std::move(finding));
+            continue;
+        }
         finding.title = "Earth electrode resistance too high for the RCD: touch voltage over the limit";
         finding.inputs = {number_input("RA", *ra_ohms, "Ω"), number_input("IΔn", idn_amps, "A", 3),
                           number_input("touch-voltage limit", limit_volts, "V")};
@@ -124,9 +140,11 @@ std::vector<Finding> tt_fault_protection(const AssessContext& context) {
 
     if (needs_ra) {
         Finding finding = context.new_finding(rule_id, "not_recorded", "installation", nullptr, nullptr, nullptr);
-        finding.title = "Earth electrode resistance RA not recorded: fault protection not confirmed";
-        finding.explanation = "The RCDs need RA × IΔn ≤ " + number_text(limit_volts) +
-                              " V, and no RA measurement is recorded for this TT installation.";
+        if (context.with_text()) {
+            finding.title = "Earth electrode resistance RA not recorded: fault protection not confirmed";
+            finding.explanation = "The RCDs need RA × IΔn ≤ " + number_text(limit_volts) +
+                                  " V, and no RA measurement is recorded for this TT installation.";
+        }
         findings.push_back(std::move(finding));
     }
     return findings;

@@ -39,12 +39,14 @@ std::optional<Finding> check_tn(const AssessContext& context, const CircuitEntry
         const double touch_volts = zs_ohms * idn_amps;
         if (touch_volts <= limits.touch_voltage_limit_volts) {
             case_name = "over_breaker_maximum_rcd_covers";
-            rcd_words = " " + AssessContext::device_text(*rcd->device) + " above still disconnects: Zs × IΔn " +
-                        number_text(idn_amps, 3) + " A = " + number_text(touch_volts, 1) + " V ≤ " +
-                        number_text(limits.touch_voltage_limit_volts) + " V (411.4.5).";
+            if (context.with_text())
+                rcd_words = " " + AssessContext::device_text(*rcd->device) + " above still disconnects: Zs × IΔn " +
+                            number_text(idn_amps, 3) + " A = " + number_text(touch_volts, 1) + " V ≤ " +
+                            number_text(limits.touch_voltage_limit_volts) + " V (411.4.5).";
         }
     }
     Finding finding = context.new_finding(rule_id, case_name, "circuit:" + circuit.id, entry.board, &circuit, &device);
+    if (!context.with_text()) return finding;
     finding.title = "Measured Zs above the maximum for the circuit-breaker";
     finding.inputs = {number_input("Zs measured", zs_ohms, "Ω"), text_input("device", device_rating_text(device)),
                       number_input("Zs maximum (Table 41.3)", max_ohms, "Ω"),
@@ -67,6 +69,7 @@ std::optional<Finding> check_tt(const AssessContext& context, const CircuitEntry
     if (!max_ohms || zs_ohms <= *max_ohms) return std::nullopt;
     const auto& circuit = *entry.circuit;
     Finding finding = context.new_finding(rule_id, "over_rcd_maximum", "circuit:" + circuit.id, entry.board, &circuit, rcd->device);
+    if (!context.with_text()) return finding;
     finding.title = "Measured Zs above the maximum for the RCD";
     finding.inputs = {number_input("Zs measured", zs_ohms, "Ω"), number_input("IΔn", idn_amps, "A", 3),
                       number_input("Zs maximum (Table 41.5)", *max_ohms, "Ω", 1)};

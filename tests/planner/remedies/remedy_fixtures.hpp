@@ -115,8 +115,8 @@ inline const pricing::PriceBook& demo_price_book() {
 }
 
 inline remedies::Assessor shipped_rules() {
-    return [](const model::Installation& installation) {
-        return rules::assess(installation, rules::default_rules_profile());
+    return [](const model::Installation& installation, rules::FindingDetail detail) {
+        return rules::assess(installation, rules::default_rules_profile(), {detail});
     };
 }
 
