@@ -134,8 +134,8 @@ void JobSession::load() {
 void JobSession::recompute() {
     const rules::RulesProfile& profile = workspace_->profile();
     findings_list_ = rules::assess(*installation_, profile);
-    remedies::Assessor assess = [&profile](const model::Installation& installation) {
-        return rules::assess(installation, profile);
+    remedies::Assessor assess = [&profile](const model::Installation& installation, rules::FindingDetail detail) {
+        return rules::assess(installation, profile, {detail});
     };
     analysis_ = std::make_unique<remedies::Analysis>(remedies::analyse(
         *installation_, assess, workspace_->book(), remedies::settings_from_profile(profile)));

@@ -368,8 +368,8 @@ std::optional<double> JobSession::predictedElectrodeOhms() const {
     priced.electrode->remeasured_ra_ohms.reset();
     priced.electrode->remeasured_on.reset();
     const rules::RulesProfile& profile = workspace_->profile();
-    remedies::Assessor assess = [&profile](const model::Installation& installation) {
-        return rules::assess(installation, profile);
+    remedies::Assessor assess = [&profile](const model::Installation& installation, rules::FindingDetail detail) {
+        return rules::assess(installation, profile, {detail});
     };
     auto analysis = remedies::analyse(priced, assess, workspace_->book(), remedies::settings_from_profile(profile));
     remedies::Plan chosen;

@@ -124,7 +124,8 @@ Plan verified_plan(Verifier& verifier, const std::string& name, const std::vecto
     plan.name = name;
     for (const Option* option : chosen) plan.option_ids.push_back(option->id);
     const model::Installation copy = verifier.combined_copy(chosen);
-    const auto after = verifier.assess(copy);
+    // plan_figures reads only ids and codes of what is left: the verdict is enough.
+    const auto after = verifier.assess(copy, rules::FindingDetail::verdict);
     plan.figures = plan_figures(copy, verifier.baseline(), after, chosen, settings);
     return plan;
 }
