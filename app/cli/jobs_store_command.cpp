@@ -23,9 +23,9 @@
 
 #include "app/cli/command.hpp"
 #include "app/store/job_store.hpp"
+#include "app/store/survey_snapshot.hpp"
 #include "planner/io/survey_document.hpp"
-#include "planner/io/survey_enums.hpp"
-#include "planner/rules/assess.hpp"
+#include "planner/rules/profile.hpp"
 
 namespace mendwright::cli {
 namespace {
@@ -117,30 +117,6 @@ std::string padded(std::string text, std::size_t width) {
 
 // --- jobs add ------------------------------------------------------------------------------
 
-store::SurveySnapshot snapshot_of(const model::Installation& installation, const std::string& document,
-                                  const std::vector<rules::Finding>& findings) {
-    store::SurveySnapshot snapshot;
-    const model::JobFacts& job = installation.job;
-    snapshot.facts = store::JobFacts{job.reference, job.client, job.site, io::word_of(io::occupancy_words(), job.occupancy),
-                                     job.inspection_date, job.inspector};
-    snapshot.document = document;
-    for (const rules::Finding& finding : findings) {
-        store::FindingRecord record;
-        record.id = finding.id;
-        record.rule = finding.rule;
-        record.code = rules::code_text(finding.code);
-        record.title = finding.title;
-        record.location = finding.location;
-        record.clause = finding.clause;
-        record.explanation = finding.explanation;
-        record.urgent = finding.urgent();
-        record.due = finding.due;
-        record.due_text = finding.due_text;
-        snapshot.findings.push_back(std::move(record));
-    }
-    return snapshot;
-}
-
 int run_add(const ParsedArgs& args, CommandContext& context) {
     const std::string& file = args.positionals.at(0);
     const auto text = read_text(file, context);
@@ -153,11 +129,10 @@ int run_add(const ParsedArgs& args, CommandContext& context) {
         for (const auto& d : errors) context.err << "  error: " << d.to_string() << "\n";
         return exit_invalid_input;
     }
-    const auto findings = rules::assess(*load.installation, rules::default_rules_profile());
     int code = exit_ok;
     auto jobs = open_store(args, context, "add", code);
     if (!jobs) return code;
-    auto added = jobs->add_job(snapshot_of(*load.installation, *text, findings));
+    auto added = jobs->add_job(store::survey_snapshot(*load.installation, *text, rules::default_rules_profile()));
     if (!added) return store_failure(context, "add", added.error());
     auto job = jobs->job(*added);
     if (!job) return store_failure(context, "add", job.error());

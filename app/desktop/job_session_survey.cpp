@@ -3,7 +3,7 @@
 #include <algorithm>
 
 #include "app/desktop/job_session.hpp"
-#include "app/desktop/snapshot.hpp"
+#include "app/store/survey_snapshot.hpp"
 #include "app/desktop/survey_edits.hpp"
 #include "app/desktop/survey_fields.hpp"
 #include "app/desktop/survey_rows.hpp"
@@ -27,7 +27,7 @@ QString JobSession::saveDocument(const std::string& document, bool record_undo) 
     const io::SurveyLoad survey = io::read_survey(document);
     if (!survey.ok()) return qtext(first_error(survey));
     auto saved = workspace_->store().save_revision(job_, detail_.latest_revision,
-                                                   survey_snapshot(*survey.installation, document, workspace_->profile()));
+                                                   store::survey_snapshot(*survey.installation, document, workspace_->profile()));
     if (!saved) return qtext(saved.error().to_string());
     if (record_undo) {
         undo_.push_back(document_);

@@ -11,7 +11,7 @@
 #include <sstream>
 
 #include "app/desktop/price_book_model.hpp"
-#include "app/desktop/snapshot.hpp"
+#include "app/store/survey_snapshot.hpp"
 #include "planner/io/survey_document.hpp"
 #include "planner/pricing/quote.hpp"
 
@@ -181,7 +181,7 @@ std::optional<store::JobId> Workspace::addSurvey(const std::string& text, std::s
         if (errors.size() > 1) error += " (and " + std::to_string(errors.size() - 1) + " more)";
         return std::nullopt;
     }
-    auto id = store_->add_job(survey_snapshot(*load.installation, text, profile_));
+    auto id = store_->add_job(store::survey_snapshot(*load.installation, text, profile_));
     if (!id) {
         error = id.error().to_string();
         return std::nullopt;

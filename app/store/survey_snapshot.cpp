@@ -1,12 +1,12 @@
-#include "app/desktop/snapshot.hpp"
+#include "app/store/survey_snapshot.hpp"
 
 #include "planner/io/survey_enums.hpp"
 #include "planner/rules/assess.hpp"
 
-namespace mendwright::desktop {
+namespace mendwright::store {
 
-store::FindingRecord finding_record(const rules::Finding& finding) {
-    store::FindingRecord record;
+FindingRecord finding_record(const rules::Finding& finding) {
+    FindingRecord record;
     record.id = finding.id;
     record.rule = finding.rule;
     record.code = rules::code_text(finding.code);
@@ -20,16 +20,16 @@ store::FindingRecord finding_record(const rules::Finding& finding) {
     return record;
 }
 
-std::vector<store::FindingRecord> finding_records(const std::vector<rules::Finding>& findings) {
-    std::vector<store::FindingRecord> records;
+std::vector<FindingRecord> finding_records(const std::vector<rules::Finding>& findings) {
+    std::vector<FindingRecord> records;
     records.reserve(findings.size());
     for (const auto& finding : findings) records.push_back(finding_record(finding));
     return records;
 }
 
-store::SurveySnapshot survey_snapshot(const model::Installation& installation, const std::string& document,
+SurveySnapshot survey_snapshot(const model::Installation& installation, const std::string& document,
                                       const rules::RulesProfile& profile) {
-    store::SurveySnapshot snapshot;
+    SurveySnapshot snapshot;
     const model::JobFacts& job = installation.job;
     snapshot.facts.reference = job.reference;
     snapshot.facts.client = job.client;
@@ -42,4 +42,4 @@ store::SurveySnapshot survey_snapshot(const model::Installation& installation, c
     return snapshot;
 }
 
-}  // namespace mendwright::desktop
+}  // namespace mendwright::store

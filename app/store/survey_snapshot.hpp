@@ -10,13 +10,13 @@
 #include "planner/rules/finding.hpp"
 #include "planner/rules/profile.hpp"
 
-namespace mendwright::desktop {
+namespace mendwright::store {
 
-store::FindingRecord finding_record(const rules::Finding& finding);
-std::vector<store::FindingRecord> finding_records(const std::vector<rules::Finding>& findings);
+FindingRecord finding_record(const rules::Finding& finding);
+std::vector<FindingRecord> finding_records(const std::vector<rules::Finding>& findings);
 
 // The snapshot the store saves for `installation`, with `document` (its survey JSON) verbatim.
-store::SurveySnapshot survey_snapshot(const model::Installation& installation, const std::string& document,
+SurveySnapshot survey_snapshot(const model::Installation& installation, const std::string& document,
                                       const rules::RulesProfile& profile);
 
-}  // namespace mendwright::desktop
+}  // namespace mendwright::store
