@@ -5,7 +5,7 @@
 #
 # Usage: bench/export/export_quote_bench.sh BUILD_DIR [RUNS]
 #   BUILD_DIR holds tests/export/export_sample_quote (build it first:
-#   cmake --build BUILD_DIR --target export_sample_quote). RUNS defaults to 5.
+#   cmake --build BUILD_DIR --target export_sample_quote). RUNS (runs per timed block) defaults to 5.
 set -euo pipefail
 build=${1:?usage: export_quote_bench.sh BUILD_DIR [RUNS]}
 runs=${2:-5}
@@ -20,26 +20,34 @@ py=/usr/bin/python3   # Debian's interpreter with python3-openpyxl
 "$py" "$here/dump_workbook_cells.py" "$work/cells-source.xlsx" "$work/cells.json"
 cell_count=$("$py" -c "import json,sys; print(sum(len(s['cells']) for s in json.load(open(sys.argv[1]))))" "$work/cells.json")
 
-measure() {  # prints "wall_ms max_rss_kb cpu_ms" of one run of the command
-  local start end rss cpu
-  start=$(date +%s%N)
+# Timing: each side runs as a block of RUNS back-to-back processes under /usr/bin/time (so the
+# 10 ms granularity of its CPU figures is spread over RUNS runs); blocks alternate between the
+# sides, BLOCKS times, and the median block is reported per run. Peak memory comes from one more
+# run of each side under /usr/bin/time -v.
+blocks=3
+block() {  # prints "wall_ms cpu_ms" per run, averaged over one block of RUNS runs
+  /usr/bin/time -f '%e %U %S' -o "$work/block.txt" bash -c "for i in \$(seq $runs); do \"\$@\" > /dev/null; done" block "$@"
+  awk -v n="$runs" '{printf "%.1f %.1f\n", $1 * 1000 / n, ($2 + $3) * 1000 / n}' "$work/block.txt"
+}
+peak_kb() {
   /usr/bin/time -v "$@" 2> "$work/time.txt" > /dev/null
-  end=$(date +%s%N)
-  rss=$(grep "Maximum resident set size" "$work/time.txt" | awk '{print $NF}')
-  cpu=$(grep -E "(User|System) time \(seconds\)" "$work/time.txt" | awk '{s += $NF} END {printf "%d", s * 1000}')
-  echo "$(( (end - start) / 1000000 )) $rss $cpu"   # milliseconds, kB, milliseconds of CPU
+  grep "Maximum resident set size" "$work/time.txt" | awk '{print $NF}'
 }
 median() { sort -n | awk '{a[NR]=$1} END {print a[int((NR+1)/2)]}'; }
 
+ours=("$tool" --out "$work" --name ours --lines 2000 --no-figures)
+theirs=("$py" "$here/openpyxl_write_cells.py" "$work/cells.json" "$work/theirs.xlsx")
 : > "$work/ours.txt"; : > "$work/theirs.txt"
-for i in $(seq "$runs"); do
-  measure "$tool" --out "$work" --name ours --lines 2000 --no-figures >> "$work/ours.txt"
-  measure "$py" "$here/openpyxl_write_cells.py" "$work/cells.json" "$work/theirs.xlsx" >> "$work/theirs.txt"
+echo "load before: $(uptime)"
+for b in $(seq "$blocks"); do
+  block "${ours[@]}" >> "$work/ours.txt"
+  block "${theirs[@]}" >> "$work/theirs.txt"
 done
-ours_s=$(cut -d' ' -f1 "$work/ours.txt" | median); ours_kb=$(cut -d' ' -f2 "$work/ours.txt" | median)
-theirs_s=$(cut -d' ' -f1 "$work/theirs.txt" | median); theirs_kb=$(cut -d' ' -f2 "$work/theirs.txt" | median)
-ours_cpu=$(cut -d' ' -f3 "$work/ours.txt" | median); theirs_cpu=$(cut -d' ' -f3 "$work/theirs.txt" | median)
-echo "cells written: $cell_count (2,000 quote lines, 4 sheets); runs: $runs, medians"
+echo "load after:  $(uptime)"
+ours_s=$(cut -d' ' -f1 "$work/ours.txt" | median); ours_cpu=$(cut -d' ' -f2 "$work/ours.txt" | median)
+theirs_s=$(cut -d' ' -f1 "$work/theirs.txt" | median); theirs_cpu=$(cut -d' ' -f2 "$work/theirs.txt" | median)
+ours_kb=$(peak_kb "${ours[@]}"); theirs_kb=$(peak_kb "${theirs[@]}")
+echo "cells written: $cell_count (2,000 quote lines, 4 sheets); $blocks blocks of $runs runs per side, median block, per run"
 echo "mendwright export (pricing + libxlsxwriter): ${ours_s} ms wall, ${ours_cpu} ms CPU, peak RSS $((ours_kb / 1024)) MB (${ours_kb} kB)"
 echo "python3-openpyxl, same cells:               ${theirs_s} ms wall, ${theirs_cpu} ms CPU, peak RSS $((theirs_kb / 1024)) MB (${theirs_kb} kB)"
 "$py" -c "import sys; a=[float(x) for x in sys.argv[1:]]; print(f'speed-up: wall {a[1]/a[0]:.1f}x, CPU {a[3]/a[2]:.1f}x')" "$ours_s" "$theirs_s" "$ours_cpu" "$theirs_cpu"

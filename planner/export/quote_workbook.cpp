@@ -38,6 +38,7 @@ struct Writer {
     lxw_workbook* book;
     Formats formats;
     lxw_error first_error = LXW_NO_ERROR;
+    bool keep_figures = false;
     std::vector<WrittenFigure> figures;
 
     // Rows of the quote sheet that the other sheets refer to.
@@ -53,6 +54,7 @@ struct Writer {
     Writer(const pricing::Quote& q, lxw_workbook* b) : quote(q), book(b), formats(b, q.works.settings.currency_symbol) {}
 
     void figure(const std::string& name, const char* sheet, lxw_row_t row, lxw_col_t col, Pence pence) {
+        if (!keep_figures) return;
         figures.push_back(WrittenFigure{name, sheet, cell_name(row, col), pence});
     }
 
@@ -174,10 +176,12 @@ void Writer::quote_sheet_contents() {
             sheet.formula(row, col_labour, "=ROUND(C" + r + "*G" + r + "*" + rate_cell + ",2)", pounds(line.labour_pence),
                           f.money);
             sheet.formula(row, col_line_total, "=F" + r + "+H" + r, pounds(line.total_pence()), f.money);
-            const std::string name = prefix + "[" + std::to_string(i) + "]";
-            figure(name + ".materials", quote_sheet, row, col_materials, line.materials_pence);
-            figure(name + ".labour", quote_sheet, row, col_labour, line.labour_pence);
-            figure(name + ".total", quote_sheet, row, col_line_total, line.total_pence());
+            if (keep_figures) {
+                const std::string name = prefix + "[" + std::to_string(i) + "]";
+                figure(name + ".materials", quote_sheet, row, col_materials, line.materials_pence);
+                figure(name + ".labour", quote_sheet, row, col_labour, line.labour_pence);
+                figure(name + ".total", quote_sheet, row, col_line_total, line.total_pence());
+            }
             line_rows.push_back(LineRow{&line, row});
         }
         sheet.text(row, col_labour, "Total for these items", f.label_total);
@@ -392,7 +396,7 @@ void Writer::materials_sheet_contents() {
         const Pence cost = pricing::line_materials_pence(order.line->unit_material_pence, order.quantity_milli);
         sheet.formula(row, 5, "=ROUND(D" + r + "*E" + r + ",2)", pounds(cost), f.money);
         sheet.text(row, 6, order.line->category);
-        figure("order[" + std::to_string(i) + "].cost", materials_sheet, row, 5, cost);
+        if (keep_figures) figure("order[" + std::to_string(i) + "].cost", materials_sheet, row, 5, cost);
         total += cost;
     }
     if (orders.empty()) sheet.text(row++, 1, "No materials to order: labour and fees only.");
@@ -404,12 +408,14 @@ void Writer::materials_sheet_contents() {
 
 }  // namespace
 
-Result<WrittenWorkbook> write_quote_workbook(const pricing::Quote& quote, const std::filesystem::path& target) {
+Result<WrittenWorkbook> write_quote_workbook(const pricing::Quote& quote, const std::filesystem::path& target,
+                                             FigureList figure_list) {
     std::vector<WrittenFigure> figures;
     auto written = replace_file(target, [&](const std::filesystem::path& temporary) -> std::optional<Problem> {
         lxw_workbook* book = workbook_new(temporary.c_str());
         if (book == nullptr) return problem("", "the spreadsheet library could not start a workbook");
         Writer writer(quote, book);
+        writer.keep_figures = figure_list == FigureList::kept;
         writer.quote_sheet_contents();
         writer.plans_sheet_contents();
         writer.findings_sheet_contents();

@@ -34,13 +34,18 @@ struct WrittenFigure {
     pricing::Pence pence = 0;
 };
 
+// Whether write_quote_workbook lists where each money figure went (for checks that compare the
+// workbook with the pricing module, cell by cell). The quote itself does not need the list.
+enum class FigureList { not_kept, kept };
+
 struct WrittenWorkbook {
     std::filesystem::path path;
-    std::vector<WrittenFigure> figures;
+    std::vector<WrittenFigure> figures;  // empty unless FigureList::kept
 };
 
 // Writes the workbook through a temporary file in the target's folder and renames it into
 // place. A target that cannot be written is a Problem naming it, and leaves no file behind.
-Result<WrittenWorkbook> write_quote_workbook(const pricing::Quote& quote, const std::filesystem::path& target);
+Result<WrittenWorkbook> write_quote_workbook(const pricing::Quote& quote, const std::filesystem::path& target,
+                                             FigureList figure_list = FigureList::not_kept);
 
 }  // namespace mendwright::spreadsheet

@@ -54,7 +54,9 @@ int main(int argc, char** argv) {
     auto quote = mendwright::test::sample_quote(std::string(MENDWRIGHT_SOURCE_DIR) + "/pricebook-demo", lines);
     if (!quote) return fail(quote.problem().to_string());
     const auto target = out / (name + ".xlsx");
-    auto written = mendwright::spreadsheet::write_quote_workbook(quote.value(), target);
+    // With --no-figures the tool writes the workbook as the product does (no figure list).
+    const auto figure_list = write_figures ? mendwright::spreadsheet::FigureList::kept : mendwright::spreadsheet::FigureList::not_kept;
+    auto written = mendwright::spreadsheet::write_quote_workbook(quote.value(), target, figure_list);
     if (!written) return fail(written.problem().to_string());
     if (!write_figures) return 0;
 
@@ -67,7 +69,7 @@ int main(int argc, char** argv) {
     edited.totals = mendwright::pricing::total_works(edited.works);
     edited.chosen_plan.total_pence = edited.totals.total_pence;
     const auto edited_target = out / (name + ".edited-by-engine.xlsx");
-    auto edited_written = mendwright::spreadsheet::write_quote_workbook(edited, edited_target);
+    auto edited_written = mendwright::spreadsheet::write_quote_workbook(edited, edited_target, mendwright::spreadsheet::FigureList::kept);
     if (!edited_written) return fail(edited_written.problem().to_string());
     std::filesystem::remove(edited_target);
 

@@ -55,7 +55,7 @@ TEST_CASE("export: a workbook is written under its name and nothing else is left
 TEST_CASE("export: the figures written are the pricing module's own", "[export]") {
     TemporaryFolder folder;
     const pricing::Quote quote = demo_quote();
-    const auto written = spreadsheet::write_quote_workbook(quote, folder.path / "quote.xlsx");
+    const auto written = spreadsheet::write_quote_workbook(quote, folder.path / "quote.xlsx", spreadsheet::FigureList::kept);
     REQUIRE(written.ok());
     auto find = [&](const std::string& name) -> const spreadsheet::WrittenFigure& {
         for (const auto& f : written->figures) {
@@ -70,6 +70,18 @@ TEST_CASE("export: the figures written are the pricing module's own", "[export]"
     CHECK(find("group[0].total").pence == quote.totals.group_pence[0]);
     CHECK(find("extras.total").pence == quote.totals.extras_pence);
     CHECK(find("plans.chosen.total").pence == quote.totals.total_pence);
+}
+
+TEST_CASE("export: without a figure list the workbook is the same and no list is kept", "[export]") {
+    TemporaryFolder folder;
+    const pricing::Quote quote = demo_quote();
+    const auto listed = spreadsheet::write_quote_workbook(quote, folder.path / "listed.xlsx", spreadsheet::FigureList::kept);
+    const auto plain = spreadsheet::write_quote_workbook(quote, folder.path / "plain.xlsx");
+    REQUIRE(listed.ok());
+    REQUIRE(plain.ok());
+    CHECK_FALSE(listed->figures.empty());
+    CHECK(plain->figures.empty());
+    CHECK(fs::file_size(folder.path / "listed.xlsx") == fs::file_size(folder.path / "plain.xlsx"));
 }
 
 TEST_CASE("export: a target in a missing folder is an error and leaves no file", "[export]") {
