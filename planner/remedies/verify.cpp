@@ -6,8 +6,10 @@
 #include <unordered_map>
 #include <unordered_set>
 
-#include "planner/model/navigation.hpp"
 #include <optional>
+
+#include "planner/model/navigation.hpp"
+#include "planner/remedies/parallel.hpp"
 
 namespace mendwright::remedies {
 
@@ -17,14 +19,24 @@ model::Installation applied_copy(const model::Installation& installation, const 
     return copy;
 }
 
-Verification compare_findings(const std::vector<rules::Finding>& before, const std::vector<rules::Finding>& after,
-                              const std::vector<std::string>& targets) {
-    // Ids are looked up by view into the findings (no copies: this runs once per option).
-    std::unordered_map<std::string_view, bool> urgent_before;  // id -> coded C1, C2 or FI
+// Finding id -> whether it is coded C1, C2 or FI. Ids are held by view into the findings
+// (which must stay where they are while the index is used).
+struct Verifier::FindingIndex {
+    std::unordered_map<std::string_view, bool> urgent;
+
+    explicit FindingIndex(const std::vector<rules::Finding>& findings) {
+        urgent.reserve(findings.size());
+        for (const auto& f : findings) urgent[f.id] = f.urgent();
+    }
+};
+
+namespace {
+
+Verification compare_indexed(const std::vector<rules::Finding>& before, const Verifier::FindingIndex& before_index,
+                             const std::vector<rules::Finding>& after, const std::vector<std::string>& targets) {
+    const auto& urgent_before = before_index.urgent;
     std::unordered_set<std::string_view> after_ids;
-    urgent_before.reserve(before.size());
     after_ids.reserve(after.size());
-    for (const auto& f : before) urgent_before[f.id] = f.urgent();
     for (const auto& f : after) after_ids.insert(f.id);
     Verification v;
     v.done = true;
@@ -49,6 +61,14 @@ Verification compare_findings(const std::vector<rules::Finding>& before, const s
     std::sort(v.introduced.begin(), v.introduced.end());
     std::sort(v.introduced_urgent.begin(), v.introduced_urgent.end());
     return v;
+}
+
+}  // namespace
+
+Verification compare_findings(const std::vector<rules::Finding>& before, const std::vector<rules::Finding>& after,
+                              const std::vector<std::string>& targets) {
+    // Ids are looked up by view into the findings (no copies: this runs once per option).
+    return compare_indexed(before, Verifier::FindingIndex(before), after, targets);
 }
 
 // The board tree by ids: the board each board is fed from, the boards each feeds, and the
@@ -193,43 +213,106 @@ model::Installation board_view(const model::Installation& installation, const st
     return view_of(installation, plan_view(installation, board_tree(installation), boards).keep);
 }
 
+// A view of the surveyed installation with its findings (verdicts only), kept per set of boards.
+struct Verifier::ViewBaseline {
+    model::Installation view;
+    std::vector<rules::Finding> findings;
+    FindingIndex index;
+
+    ViewBaseline(model::Installation v, std::vector<rules::Finding> f)
+        : view(std::move(v)), findings(std::move(f)), index(findings) {}
+    ViewBaseline(const ViewBaseline&) = delete;  // the index points into `findings`
+    ViewBaseline& operator=(const ViewBaseline&) = delete;
+};
+
+// How an option is verified: on the whole installation, or on the view `plan.keep` (key `key`).
+struct Verifier::Route {
+    bool whole = true;
+    ViewPlan plan;
+    std::string key;
+};
+
 Verifier::Verifier(const model::Installation& installation, Assessor assess)
     : installation_(installation), assess_(std::move(assess)), baseline_(assess_(installation)),
       tree_(std::make_unique<BoardTree>(board_tree(installation))) {
     for (const auto& f : baseline_) baseline_boards_.emplace(f.id, f.board_id);
+    baseline_index_ = std::make_unique<FindingIndex>(baseline_);
 }
 
 Verifier::~Verifier() = default;
 
-Verification Verifier::verify_whole(const Option& option) {
+Verification Verifier::verify_whole(const Option& option) const {
     const model::Installation copy = applied_copy(installation_, option);
-    return compare_findings(baseline_, assess_(copy, rules::FindingDetail::verdict), option.targets);
+    return compare_indexed(baseline_, *baseline_index_, assess_(copy, rules::FindingDetail::verdict), option.targets);
 }
 
-Verification Verifier::verify(const Option& option) {
-    if (option.whole_installation || option.touched_boards.empty()) return verify_whole(option);
-    const ViewPlan plan = plan_view(installation_, *tree_, option.touched_boards);
-    if (plan.keep.size() >= installation_.boards.size()) return verify_whole(option);
+Verifier::Route Verifier::route_of(const Option& option) const {
+    Route route;
+    if (option.whole_installation || option.touched_boards.empty()) return route;
+    route.plan = plan_view(installation_, *tree_, option.touched_boards);
+    if (route.plan.keep.size() >= installation_.boards.size()) return route;
     // A target must be a finding about a board of the view: an installation-wide one (RA not
     // recorded, say) may rest on boards the view leaves out.
     for (const auto& id : option.targets) {
         const auto found = baseline_boards_.find(id);
-        if (found == baseline_boards_.end() || found->second.empty() || !plan.keep.count(found->second))
-            return verify_whole(option);
+        if (found == baseline_boards_.end() || found->second.empty() || !route.plan.keep.count(found->second)) return route;
     }
-    // Before: the view of the surveyed installation (cached per set of boards).
-    const std::string key = view_key(plan.keep);
-    model::Installation view = view_of(installation_, plan.keep);
-    auto cached = view_baselines_.find(key);
-    if (cached == view_baselines_.end()) cached = view_baselines_.emplace(key, assess_(view, rules::FindingDetail::verdict)).first;
-    const std::vector<rules::Finding>& before = cached->second;
+    route.whole = false;
+    route.key = view_key(route.plan.keep);
+    return route;
+}
+
+std::unique_ptr<const Verifier::ViewBaseline> Verifier::view_baseline(const std::set<std::string>& keep) const {
+    model::Installation view = view_of(installation_, keep);
+    std::vector<rules::Finding> findings = assess_(view, rules::FindingDetail::verdict);
+    return std::make_unique<const ViewBaseline>(std::move(view), std::move(findings));
+}
+
+Verification Verifier::verify(const Option& option) {
+    const Route route = route_of(option);
+    if (route.whole) return verify_whole(option);
+    // Before: the view of the surveyed installation (kept per set of boards).
+    auto cached = view_baselines_.find(route.key);
+    if (cached == view_baselines_.end()) cached = view_baselines_.emplace(route.key, view_baseline(route.plan.keep)).first;
+    return verify_on_view(option, route, *cached->second);
+}
+
+Verification Verifier::verify_prepared(const Option& option) const {
+    const Route route = route_of(option);
+    if (route.whole) return verify_whole(option);
+    const auto cached = view_baselines_.find(route.key);
+    if (cached != view_baselines_.end()) return verify_on_view(option, route, *cached->second);
+    const auto before = view_baseline(route.plan.keep);
+    return verify_on_view(option, route, *before);
+}
+
+void Verifier::prepare(const std::vector<Option>& options) {
+    std::vector<const std::set<std::string>*> wanted;
+    std::vector<std::string> keys;
+    std::vector<Route> routes;
+    routes.reserve(options.size());
+    std::set<std::string> seen;
+    for (const auto& option : options) {
+        routes.push_back(route_of(option));
+        const Route& route = routes.back();
+        if (route.whole || view_baselines_.count(route.key) || !seen.insert(route.key).second) continue;
+        wanted.push_back(&route.plan.keep);
+        keys.push_back(route.key);
+    }
+    std::vector<std::unique_ptr<const ViewBaseline>> made(wanted.size());
+    run_in_parallel(wanted.size(), [&](std::size_t i) { made[i] = view_baseline(*wanted[i]); });
+    for (std::size_t i = 0; i < made.size(); ++i) view_baselines_.emplace(keys[i], std::move(made[i]));
+}
+
+Verification Verifier::verify_on_view(const Option& option, const Route& route, const ViewBaseline& baseline) const {
+    const std::vector<rules::Finding>& before = baseline.findings;
     // After: the option applied to a copy of that same view; it must have changed only the
     // boards it touches (and those below), or the whole installation is assessed instead.
-    model::Installation changed = view;
+    model::Installation changed = baseline.view;
     if (option.apply) option.apply(changed);
-    if (!changes_confined(view, changed, plan.changeable)) return verify_whole(option);
+    if (!changes_confined(baseline.view, changed, route.plan.changeable)) return verify_whole(option);
     const std::vector<rules::Finding> after = assess_(changed, rules::FindingDetail::verdict);
-    Verification v = compare_findings(before, after, option.targets);
+    Verification v = compare_indexed(before, baseline.index, after, option.targets);
     // An installation-wide finding that comes or goes in the view may rest on boards left out
     // (RA not recorded is there if any circuit anywhere has an RCD): the whole decides.
     std::unordered_set<std::string_view> moved(v.cleared.begin(), v.cleared.end());
@@ -252,7 +335,9 @@ model::Installation Verifier::combined_copy(const std::vector<const Option*>& op
 }
 
 void verify_options(Verifier& verifier, std::vector<Option>& options) {
-    for (auto& option : options) option.verification = verifier.verify(option);
+    verifier.prepare(options);
+    const Verifier& shared = verifier;  // from here on only read
+    run_in_parallel(options.size(), [&](std::size_t i) { options[i].verification = shared.verify_prepared(options[i]); });
 }
 
 }  // namespace mendwright::remedies

@@ -12,10 +12,17 @@
 // installation-wide finding comes or goes; otherwise, and for options at the origin and every
 // plan (combined_copy), the whole installation is assessed. Tests compare the two verdicts for
 // every option on the demo jobs and on random installations.
+//
+// verify_options shares the options out over the machine's cores (parallel.hpp): each option's
+// copy, assessment and verdict are its own, and the views' "before" findings are all assessed
+// and kept first, so the verifications only read what they share. The Assessor is therefore
+// called from several threads at once and must be safe to (rules::assess with a profile that
+// nothing changes meanwhile is).
 
 #include <functional>
 #include <map>
 #include <memory>
+#include <set>
 #include <unordered_map>
 #include <string>
 #include <type_traits>
@@ -72,6 +79,9 @@ class Verifier {
 public:
     struct BoardTree;  // parents, children and feeding circuits by board id (verify.cpp)
 
+    struct ViewBaseline;  // a view of the surveyed installation and its findings (verify.cpp)
+    struct FindingIndex;  // finding id -> whether it is urgent (verify.cpp)
+
     Verifier(const model::Installation& installation, Assessor assess);
     ~Verifier();
     Verifier(const Verifier&) = delete;
@@ -85,7 +95,14 @@ public:
     // Applies the option to a copy (or a view) and compares. Sets nothing on the option.
     Verification verify(const Option& option);
     // The same on the whole installation, never a view (tests compare the two).
-    Verification verify_whole(const Option& option);
+    [[nodiscard]] Verification verify_whole(const Option& option) const;
+
+    // Assesses and keeps the "before" of every view these options are verified on (the distinct
+    // views shared over the cores), so that verify_prepared finds them all.
+    void prepare(const std::vector<Option>& options);
+    // verify() without keeping anything: a view not prepared is assessed and let go. Changes
+    // nothing in the Verifier, so several threads may call it at once.
+    [[nodiscard]] Verification verify_prepared(const Option& option) const;
 
     // Every option of a plan applied to one copy, in the order given; the rules run on it.
     [[nodiscard]] model::Installation combined_copy(const std::vector<const Option*>& options) const;
@@ -100,14 +117,21 @@ private:
     Assessor assess_;
     std::vector<rules::Finding> baseline_;
     std::unordered_map<std::string, std::string> baseline_boards_;  // finding id -> its board (empty: installation-wide)
-    std::map<std::string, std::vector<rules::Finding>> view_baselines_;  // by view key; verdicts only
+    std::unique_ptr<FindingIndex> baseline_index_;
+    std::map<std::string, std::unique_ptr<const ViewBaseline>> view_baselines_;  // by view key; verdicts only
     std::unique_ptr<BoardTree> tree_;  // the surveyed installation's board tree, walked once
+
+    struct Route;  // whole installation, or a view (verify.cpp)
+    [[nodiscard]] Route route_of(const Option& option) const;
+    [[nodiscard]] std::unique_ptr<const ViewBaseline> view_baseline(const std::set<std::string>& keep) const;
+    [[nodiscard]] Verification verify_on_view(const Option& option, const Route& route, const ViewBaseline& before) const;
 };
 
 // The view described above of `boards` (touched boards). Exposed for tests.
 model::Installation board_view(const model::Installation& installation, const std::vector<std::string>& boards);
 
-// Verifies every option (sets option.verification).
+// Verifies every option (sets option.verification), the options shared over the cores; the
+// verdicts are those verify() gives one by one.
 void verify_options(Verifier& verifier, std::vector<Option>& options);
 
 }  // namespace mendwright::remedies

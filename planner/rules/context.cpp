@@ -2,7 +2,10 @@
 
 #include "planner/calc/disconnection_time.hpp"
 
+#include <optional>
+#include <string_view>
 #include <unordered_map>
+#include <vector>
 
 namespace mendwright::rules {
 
@@ -16,37 +19,105 @@ const model::Device* board_device(const model::Board& board, const std::string& 
 
 }  // namespace
 
+namespace {
+
+// Appends the board's devices above `upstream`, nearest first, with the guard against loops
+// of an unvalidated document (at most one step per device of the board).
+void append_board_devices(const model::Board& board, const std::optional<std::string>& upstream,
+                          std::vector<model::DeviceRef>& chain) {
+    const std::optional<std::string>* next = &upstream;
+    std::size_t steps = 0;
+    while (*next && steps++ <= board.devices.size()) {
+        const model::Device* device = board_device(board, **next);
+        if (!device) break;
+        chain.push_back({&board, device, nullptr});
+        next = &device->upstream_id;
+    }
+}
+
+}  // namespace
+
 AssessContext::AssessContext(const model::Installation& installation, const RulesProfile& profile, FindingDetail detail)
     : installation_(installation), profile_(profile), detail_(detail) {
     // Which circuit feeds each board, looked up once (model::feeding_circuit scans every circuit
     // on each call; assess runs hundreds of times per remedy search).
-    std::unordered_map<std::string, model::CircuitRef> feeder_of;
-    for (const auto& board : installation.boards)
+    std::unordered_map<std::string_view, model::CircuitRef> feeder_of;
+    std::unordered_map<const model::Board*, std::size_t> index_of;
+    std::size_t circuit_count = 0;
+    feeder_of.reserve(installation.boards.size());
+    index_of.reserve(installation.boards.size());
+    for (std::size_t b = 0; b < installation.boards.size(); ++b) {
+        const auto& board = installation.boards[b];
+        index_of.emplace(&board, b);
+        circuit_count += board.circuits.size();
         for (const auto& circuit : board.circuits)
             if (circuit.feeds_board_id) feeder_of.emplace(*circuit.feeds_board_id, model::CircuitRef{&board, &circuit});
+    }
+    const std::size_t board_count = installation.boards.size();
 
-    // The same walk as model::devices_above, with the same guards against loops in an
-    // unvalidated document.
-    for (std::size_t b = 0; b < installation.boards.size(); ++b) {
+    // The same walk as model::devices_above: a circuit's own device, its board's devices above
+    // it, then the feeding circuit in the parent board and its devices, up to the origin. What
+    // lies above a board's incoming supply is the same for all its circuits, so it is walked
+    // once per board (`above[b]`, parents before children). A document whose boards feed each
+    // other in a loop has no top: there every circuit's chain is walked on its own, cut off
+    // after as many levels as there are boards.
+    std::vector<std::vector<model::DeviceRef>> above(board_count);
+    std::vector<char> state(board_count, 0);  // 0 not done, 1 in progress, 2 done
+    bool looped = false;
+    for (std::size_t start = 0; start < board_count && !looped; ++start) {
+        // The boards from `start` up to the first one already done (or the origin).
+        std::vector<std::size_t> path;
+        std::size_t b = start;
+        while (state[b] == 0) {
+            state[b] = 1;
+            path.push_back(b);
+            const auto found = feeder_of.find(installation.boards[b].id);
+            if (found == feeder_of.end()) break;
+            b = index_of.at(found->second.board);
+            if (state[b] == 1) {
+                looped = true;
+                break;
+            }
+        }
+        if (looped) break;
+        for (auto it = path.rbegin(); it != path.rend(); ++it) {
+            const auto& board = installation.boards[*it];
+            auto& chain = above[*it];
+            const auto found = feeder_of.find(board.id);
+            if (found != feeder_of.end()) {
+                const model::Board& parent = *found->second.board;
+                const model::Circuit& feed = *found->second.circuit;
+                chain.push_back({&parent, &feed.device, &feed});
+                append_board_devices(parent, feed.upstream_id, chain);
+                const auto& higher = above[index_of.at(&parent)];
+                chain.insert(chain.end(), higher.begin(), higher.end());
+            }
+            state[*it] = 2;
+        }
+    }
+
+    circuits_.reserve(circuit_count);
+    for (std::size_t b = 0; b < board_count; ++b) {
         const auto& board = installation.boards[b];
         for (std::size_t c = 0; c < board.circuits.size(); ++c) {
             CircuitEntry entry{&board, &board.circuits[c], b, c, {}, {}};
-            const model::Board* current_board = &board;
-            const model::Circuit* current_circuit = &board.circuits[c];
-            for (std::size_t hops = 0; current_board && current_circuit && hops <= installation.boards.size(); ++hops) {
-                entry.chain.push_back({current_board, &current_circuit->device, current_circuit});
-                std::optional<std::string> next = current_circuit->upstream_id;
-                std::size_t steps = 0;
-                while (next && steps++ <= current_board->devices.size()) {
-                    const model::Device* device = board_device(*current_board, *next);
-                    if (!device) break;
-                    entry.chain.push_back({current_board, device, nullptr});
-                    next = device->upstream_id;
+            if (!looped) {
+                const auto& higher = above[b];
+                entry.chain.reserve(1 + board.devices.size() + higher.size());
+                entry.chain.push_back({&board, &board.circuits[c].device, &board.circuits[c]});
+                append_board_devices(board, board.circuits[c].upstream_id, entry.chain);
+                entry.chain.insert(entry.chain.end(), higher.begin(), higher.end());
+            } else {
+                const model::Board* current_board = &board;
+                const model::Circuit* current_circuit = &board.circuits[c];
+                for (std::size_t hops = 0; current_board && current_circuit && hops <= board_count; ++hops) {
+                    entry.chain.push_back({current_board, &current_circuit->device, current_circuit});
+                    append_board_devices(*current_board, current_circuit->upstream_id, entry.chain);
+                    const auto found = feeder_of.find(current_board->id);
+                    if (found == feeder_of.end()) break;
+                    current_board = found->second.board;
+                    current_circuit = found->second.circuit;
                 }
-                const auto found = feeder_of.find(current_board->id);
-                if (found == feeder_of.end()) break;
-                current_board = found->second.board;
-                current_circuit = found->second.circuit;
             }
             for (const auto& ref : entry.chain)
                 if (model::is_residual_current_device(*ref.device)) entry.residual_current_devices.push_back(ref);
