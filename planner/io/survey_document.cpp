@@ -34,9 +34,51 @@ std::vector<Diagnostic> SurveyLoad::warnings() const {
 
 namespace {
 
-// Parses the text, recording each key that appears twice in one object (JSON parsers keep
-// only one of the two values, which would silently drop the other).
-std::optional<Json> parse_json(std::string_view text, Diagnostics& d) {
+// Builds the document (nlohmann's own DOM builder does the building) while recording each key
+// that appears twice in one object (JSON parsers keep only one of the two values, which would
+// silently drop the other). A SAX handler rather than a parse callback: the callback parser
+// builds every value twice over and calls back for each, which on a large survey was most of
+// the reading time.
+class DuplicateKeyCheck {
+public:
+    using number_integer_t = Json::number_integer_t;
+    using number_unsigned_t = Json::number_unsigned_t;
+    using number_float_t = Json::number_float_t;
+    using string_t = Json::string_t;
+    using binary_t = Json::binary_t;
+
+    DuplicateKeyCheck(Json& root, Diagnostics& d) : dom_(root, true), d_(d) {}
+
+    bool null() { return value_done(dom_.null()); }
+    bool boolean(bool value) { return value_done(dom_.boolean(value)); }
+    bool number_integer(number_integer_t value) { return value_done(dom_.number_integer(value)); }
+    bool number_unsigned(number_unsigned_t value) { return value_done(dom_.number_unsigned(value)); }
+    bool number_float(number_float_t value, const string_t& text) { return value_done(dom_.number_float(value, text)); }
+    bool string(string_t& value) { return value_done(dom_.string(value)); }
+    bool binary(binary_t& value) { return value_done(dom_.binary(value)); }
+
+    bool start_object(std::size_t length) { return open(false) && dom_.start_object(length); }
+    bool start_array(std::size_t length) { return open(true) && dom_.start_array(length); }
+    bool end_object() { return close() && dom_.end_object() && value_done(true); }
+    bool end_array() { return close() && dom_.end_array() && value_done(true); }
+
+    bool key(string_t& key) {
+        Frame& top = stack_[depth_ - 1];
+        const auto begin = top.keys.begin();
+        const auto end = begin + static_cast<std::ptrdiff_t>(top.key_count);
+        const bool repeated = std::find(begin, end, key) != end;
+        if (top.key_count == top.keys.size()) top.keys.emplace_back();
+        top.keys[top.key_count++] = key;
+        if (repeated) d_.error(field_path(path_of_open(), key), "appears twice in the same object; expected each field once");
+        return dom_.key(key);
+    }
+
+    template <class Exception>
+    bool parse_error(std::size_t position, const std::string& token, const Exception& error) {
+        return dom_.parse_error(position, token, error);  // throws it
+    }
+
+private:
     // One frame per open object or array. Frames are reused as the parser goes in and out (no
     // allocation per object), and JSON paths are put together only for a key that repeats.
     struct Frame {
@@ -45,55 +87,46 @@ std::optional<Json> parse_json(std::string_view text, Diagnostics& d) {
         std::vector<std::string> keys;  // an object's keys so far (a handful: a linear search)
         std::size_t key_count = 0;
     };
-    std::vector<Frame> stack;
-    std::size_t depth = 0;
-    const auto path_of_open = [&]() {  // the path of the innermost open object or array
+
+    bool open(bool is_array) {
+        if (depth_ == stack_.size()) stack_.emplace_back();
+        Frame& frame = stack_[depth_++];
+        frame.is_array = is_array;
+        frame.index = 0;
+        frame.key_count = 0;
+        return true;
+    }
+    bool close() {
+        if (depth_ > 0) --depth_;
+        return true;
+    }
+    bool value_done(bool ok) {
+        if (depth_ > 0 && stack_[depth_ - 1].is_array) ++stack_[depth_ - 1].index;
+        return ok;
+    }
+    // The path of the innermost open object or array.
+    std::string path_of_open() const {
         std::string path;
-        for (std::size_t i = 1; i < depth; ++i) {
-            const Frame& parent = stack[i - 1];
+        for (std::size_t i = 1; i < depth_; ++i) {
+            const Frame& parent = stack_[i - 1];
             path = parent.is_array ? index_path(path, parent.index) : field_path(path, parent.keys[parent.key_count - 1]);
         }
         return path;
-    };
-    const auto value_done = [&] {
-        if (depth > 0 && stack[depth - 1].is_array) ++stack[depth - 1].index;
-    };
-    const Json::parser_callback_t callback = [&](int, Json::parse_event_t event, Json& parsed) {
-        switch (event) {
-            case Json::parse_event_t::object_start:
-            case Json::parse_event_t::array_start: {
-                if (depth == stack.size()) stack.emplace_back();
-                Frame& frame = stack[depth++];
-                frame.is_array = event == Json::parse_event_t::array_start;
-                frame.index = 0;
-                frame.key_count = 0;
-                break;
-            }
-            case Json::parse_event_t::key: {
-                Frame& top = stack[depth - 1];
-                const auto& key = parsed.get_ref<const std::string&>();
-                const auto begin = top.keys.begin();
-                const auto end = begin + static_cast<std::ptrdiff_t>(top.key_count);
-                const bool repeated = std::find(begin, end, key) != end;
-                if (top.key_count == top.keys.size()) top.keys.emplace_back();
-                top.keys[top.key_count++] = key;
-                if (repeated)
-                    d.error(field_path(path_of_open(), key), "appears twice in the same object; expected each field once");
-                break;
-            }
-            case Json::parse_event_t::object_end:
-            case Json::parse_event_t::array_end:
-                if (depth > 0) --depth;
-                value_done();
-                break;
-            case Json::parse_event_t::value:
-                value_done();
-                break;
-        }
-        return true;
-    };
+    }
+
+    nlohmann::detail::json_sax_dom_parser<Json> dom_;
+    Diagnostics& d_;
+    std::vector<Frame> stack_;
+    std::size_t depth_ = 0;
+};
+
+// Parses the text, recording each key that appears twice in one object.
+std::optional<Json> parse_json(std::string_view text, Diagnostics& d) {
     try {
-        return Json::parse(text.begin(), text.end(), callback, true, false);
+        Json root;
+        DuplicateKeyCheck handler(root, d);
+        Json::sax_parse(text.begin(), text.end(), &handler, nlohmann::detail::input_format_t::json, true, false);
+        return std::optional<Json>(std::move(root));
     } catch (const Json::parse_error& e) {
         // what(): "[json.exception.parse_error.101] parse error at line 3, column 5: ..."
         std::string message = e.what();

@@ -19,21 +19,36 @@ model::Installation applied_copy(const model::Installation& installation, const 
     return copy;
 }
 
-// Finding id -> whether it is coded C1, C2 or FI. Ids are held by view into the findings
-// (which must stay where they are while the index is used).
+// What verification reads of a finding it compares against: its id, whether it is coded C1, C2
+// or FI, and whether it is installation-wide (no board). A few bytes instead of a whole Finding,
+// for the baseline and every view kept.
+struct FindingBrief {
+    std::string id;
+    bool urgent = false;
+    bool installation_wide = false;
+};
+
+// Findings before, in their order, with their ids indexed (held by view into `briefs`, which
+// therefore never changes once made).
 struct Verifier::FindingIndex {
-    std::unordered_map<std::string_view, bool> urgent;
+    std::vector<FindingBrief> briefs;
+    std::unordered_map<std::string_view, bool> urgent;  // id -> urgent
 
     explicit FindingIndex(const std::vector<rules::Finding>& findings) {
-        urgent.reserve(findings.size());
-        for (const auto& f : findings) urgent[f.id] = f.urgent();
+        briefs.reserve(findings.size());
+        for (const auto& f : findings) briefs.push_back({f.id, f.urgent(), f.board_id.empty()});
+        urgent.reserve(briefs.size());
+        for (const auto& f : briefs) urgent[f.id] = f.urgent;
     }
+    FindingIndex(const FindingIndex&) = delete;
+    FindingIndex& operator=(const FindingIndex&) = delete;
 };
 
 namespace {
 
-Verification compare_indexed(const std::vector<rules::Finding>& before, const Verifier::FindingIndex& before_index,
-                             const std::vector<rules::Finding>& after, const std::vector<std::string>& targets) {
+Verification compare_indexed(const Verifier::FindingIndex& before_index, const std::vector<rules::Finding>& after,
+                             const std::vector<std::string>& targets) {
+    const auto& before = before_index.briefs;
     const auto& urgent_before = before_index.urgent;
     std::unordered_set<std::string_view> after_ids;
     after_ids.reserve(after.size());
@@ -68,7 +83,7 @@ Verification compare_indexed(const std::vector<rules::Finding>& before, const Ve
 Verification compare_findings(const std::vector<rules::Finding>& before, const std::vector<rules::Finding>& after,
                               const std::vector<std::string>& targets) {
     // Ids are looked up by view into the findings (no copies: this runs once per option).
-    return compare_indexed(before, Verifier::FindingIndex(before), after, targets);
+    return compare_indexed(Verifier::FindingIndex(before), after, targets);
 }
 
 // The board tree by ids: the board each board is fed from, the boards each feeds, and the
@@ -158,31 +173,52 @@ std::string view_key(const std::set<std::string>& boards) {
     return key;
 }
 
-model::Installation view_of(const model::Installation& installation, const std::set<std::string>& keep) {
+// A view's boards and observations, by pointer into the installation (in its order).
+struct ViewParts {
+    std::vector<const model::Board*> boards;
+    std::vector<const model::Observation*> observations;
+};
+
+ViewParts view_parts(const model::Installation& installation, const std::set<std::string>& keep) {
+    ViewParts parts;
+    for (const auto& board : installation.boards)
+        if (keep.count(board.id)) parts.boards.push_back(&board);
+    for (const auto& observation : installation.observations)
+        if (!observation.board_id || keep.count(*observation.board_id)) parts.observations.push_back(&observation);
+    return parts;
+}
+
+model::Installation view_of(const model::Installation& installation, const ViewParts& parts) {
     model::Installation view;
     view.job = installation.job;
     view.supply = installation.supply;
     view.electrode = installation.electrode;
     view.tails = installation.tails;
-    for (const auto& board : installation.boards)
-        if (keep.count(board.id)) view.boards.push_back(board);
-    for (const auto& observation : installation.observations)
-        if (!observation.board_id || keep.count(*observation.board_id)) view.observations.push_back(observation);
+    view.boards.reserve(parts.boards.size());
+    for (const auto* board : parts.boards) view.boards.push_back(*board);
+    view.observations.reserve(parts.observations.size());
+    for (const auto* observation : parts.observations) view.observations.push_back(*observation);
     return view;
 }
 
-// Whether the option, applied to the view, changed nothing outside the boards it may change:
-// the same supply, electrode, tails and job; the same boards in the same places, equal unless
-// changeable; the same observations apart from those about changeable boards. The view's
-// verdict rests on this, so it is checked rather than taken from the option.
-bool changes_confined(const model::Installation& before, const model::Installation& after,
+model::Installation view_of(const model::Installation& installation, const std::set<std::string>& keep) {
+    return view_of(installation, view_parts(installation, keep));
+}
+
+// Whether the option, applied to the view (`before`: its parts in `installation`), changed
+// nothing outside the boards it may change: the same supply, electrode, tails and job; the same
+// boards in the same places, equal unless changeable; the same observations apart from those
+// about changeable boards. The view's verdict rests on this, so it is checked rather than taken
+// from the option.
+bool changes_confined(const model::Installation& installation, const ViewParts& before, const model::Installation& after,
                       const std::set<std::string>& changeable) {
-    if (!(before.job == after.job) || !(before.supply == after.supply) || !(before.electrode == after.electrode) ||
-        !(before.tails == after.tails) || before.boards.size() != after.boards.size())
+    if (!(installation.job == after.job) || !(installation.supply == after.supply) ||
+        !(installation.electrode == after.electrode) || !(installation.tails == after.tails) ||
+        before.boards.size() != after.boards.size())
         return false;
     std::unordered_map<std::string_view, std::string_view> circuit_board;
     for (std::size_t b = 0; b < before.boards.size(); ++b) {
-        const auto& was = before.boards[b];
+        const auto& was = *before.boards[b];
         const auto& now = after.boards[b];
         if (was.id != now.id) return false;
         if (!changeable.count(was.id) && !(was == now)) return false;
@@ -197,8 +233,8 @@ bool changes_confined(const model::Installation& before, const model::Installati
         return true;
     };
     std::vector<const model::Observation*> was, now;
-    for (const auto& o : before.observations)
-        if (outside(o)) was.push_back(&o);
+    for (const auto* o : before.observations)
+        if (outside(*o)) was.push_back(o);
     for (const auto& o : after.observations)
         if (outside(o)) now.push_back(&o);
     if (was.size() != now.size()) return false;
@@ -213,16 +249,12 @@ model::Installation board_view(const model::Installation& installation, const st
     return view_of(installation, plan_view(installation, board_tree(installation), boards).keep);
 }
 
-// A view of the surveyed installation with its findings (verdicts only), kept per set of boards.
+// The findings (verdicts only) of a view of the surveyed installation, kept per set of boards.
+// The view itself is not kept: it is made again, by copy, for each option verified on it.
 struct Verifier::ViewBaseline {
-    model::Installation view;
-    std::vector<rules::Finding> findings;
     FindingIndex index;
 
-    ViewBaseline(model::Installation v, std::vector<rules::Finding> f)
-        : view(std::move(v)), findings(std::move(f)), index(findings) {}
-    ViewBaseline(const ViewBaseline&) = delete;  // the index points into `findings`
-    ViewBaseline& operator=(const ViewBaseline&) = delete;
+    explicit ViewBaseline(const std::vector<rules::Finding>& findings) : index(findings) {}
 };
 
 // How an option is verified: on the whole installation, or on the view `plan.keep` (key `key`).
@@ -243,7 +275,7 @@ Verifier::~Verifier() = default;
 
 Verification Verifier::verify_whole(const Option& option) const {
     const model::Installation copy = applied_copy(installation_, option);
-    return compare_indexed(baseline_, *baseline_index_, assess_(copy, rules::FindingDetail::verdict), option.targets);
+    return compare_indexed(*baseline_index_, assess_(copy, rules::FindingDetail::verdict), option.targets);
 }
 
 Verifier::Route Verifier::route_of(const Option& option) const {
@@ -263,9 +295,7 @@ Verifier::Route Verifier::route_of(const Option& option) const {
 }
 
 std::unique_ptr<const Verifier::ViewBaseline> Verifier::view_baseline(const std::set<std::string>& keep) const {
-    model::Installation view = view_of(installation_, keep);
-    std::vector<rules::Finding> findings = assess_(view, rules::FindingDetail::verdict);
-    return std::make_unique<const ViewBaseline>(std::move(view), std::move(findings));
+    return std::make_unique<const ViewBaseline>(assess_(view_of(installation_, keep), rules::FindingDetail::verdict));
 }
 
 Verification Verifier::verify(const Option& option) {
@@ -305,21 +335,22 @@ void Verifier::prepare(const std::vector<Option>& options) {
 }
 
 Verification Verifier::verify_on_view(const Option& option, const Route& route, const ViewBaseline& baseline) const {
-    const std::vector<rules::Finding>& before = baseline.findings;
     // After: the option applied to a copy of that same view; it must have changed only the
     // boards it touches (and those below), or the whole installation is assessed instead.
-    model::Installation changed = baseline.view;
+    const ViewParts parts = view_parts(installation_, route.plan.keep);
+    model::Installation changed = view_of(installation_, parts);
     if (option.apply) option.apply(changed);
-    if (!changes_confined(baseline.view, changed, route.plan.changeable)) return verify_whole(option);
+    if (!changes_confined(installation_, parts, changed, route.plan.changeable)) return verify_whole(option);
     const std::vector<rules::Finding> after = assess_(changed, rules::FindingDetail::verdict);
-    Verification v = compare_indexed(before, baseline.index, after, option.targets);
+    Verification v = compare_indexed(baseline.index, after, option.targets);
     // An installation-wide finding that comes or goes in the view may rest on boards left out
     // (RA not recorded is there if any circuit anywhere has an RCD): the whole decides.
     std::unordered_set<std::string_view> moved(v.cleared.begin(), v.cleared.end());
     moved.insert(v.introduced.begin(), v.introduced.end());
-    for (const auto* side : {&before, &after})
-        for (const auto& f : *side)
-            if (f.board_id.empty() && moved.count(f.id)) return verify_whole(option);
+    for (const auto& f : baseline.index.briefs)
+        if (f.installation_wide && moved.count(f.id)) return verify_whole(option);
+    for (const auto& f : after)
+        if (f.board_id.empty() && moved.count(f.id)) return verify_whole(option);
     // Defensive: only findings the whole installation has can count as cleared.
     v.cleared.erase(std::remove_if(v.cleared.begin(), v.cleared.end(),
                                    [&](const std::string& id) { return !baseline_boards_.count(id); }),
