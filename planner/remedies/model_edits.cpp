@@ -41,6 +41,25 @@ std::string unused_id(const model::Installation& installation, const std::string
     }
 }
 
+IdsInUse::IdsInUse(const model::Installation& installation) {
+    for (const auto& b : installation.boards) {
+        ids_.insert(b.id);
+        for (const auto& d : b.devices) ids_.insert(d.id);
+        for (const auto& c : b.circuits) {
+            ids_.insert(c.id);
+            ids_.insert(c.device.id);
+        }
+    }
+}
+
+std::string IdsInUse::unused(const std::string& wanted) const {
+    if (!ids_.count(wanted)) return wanted;
+    for (int n = 2;; ++n) {
+        std::string candidate = wanted + "-" + std::to_string(n);
+        if (!ids_.count(candidate)) return candidate;
+    }
+}
+
 int circuits_without_rcd(const model::Installation& installation, const model::Board& board) {
     int count = 0;
     for (const auto& circuit : board.circuits) {

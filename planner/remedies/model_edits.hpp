@@ -4,6 +4,8 @@
 // may leave a board out).
 
 #include <string>
+#include <string_view>
+#include <unordered_set>
 #include <vector>
 
 #include "planner/model/installation.hpp"
@@ -16,6 +18,19 @@ model::Device* device(model::Installation& installation, const std::string& devi
 
 // An id not yet used by any board, device or circuit: `wanted`, else `wanted-2`, `wanted-3`...
 std::string unused_id(const model::Installation& installation, const std::string& wanted);
+
+// The same for many ids against one state of the installation: the ids in use are gathered once
+// (unused_id walks the whole installation on every call). Ids handed out are not added: each
+// answer is what unused_id would give for the installation as it was when this was made. Holds
+// views into the installation, which must not change while this is used.
+class IdsInUse {
+public:
+    explicit IdsInUse(const model::Installation& installation);
+    [[nodiscard]] std::string unused(const std::string& wanted) const;
+
+private:
+    std::unordered_set<std::string_view> ids_;
+};
 
 // Final circuits of a board with no RCD or RCBO anywhere above them.
 int circuits_without_rcd(const model::Installation& installation, const model::Board& board);

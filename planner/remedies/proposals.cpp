@@ -8,20 +8,26 @@
 #include <iomanip>
 #include <unordered_map>
 
+#include "planner/remedies/parallel.hpp"
+
 namespace mendwright::remedies {
 
 std::vector<Option> propose_options(const ProposalContext& context) {
+    // Each kind is proposed on its own from the same read-only context, so the kinds are shared
+    // across the cores (parallel.hpp); the options are then put in this order.
+    using Proposer = std::vector<Option> (*)(const ProposalContext&);
+    static constexpr Proposer proposers[] = {propose_upstream_rcd, propose_replacement_boards, propose_rcbo_swaps,
+                                             propose_selectivity,  propose_electrodes,         propose_tails,
+                                             propose_manual_lines};
+    constexpr std::size_t kinds = sizeof(proposers) / sizeof(proposers[0]);
+    std::vector<std::vector<Option>> by_kind(kinds);
+    run_in_parallel(kinds, [&](std::size_t i) { by_kind[i] = proposers[i](context); });
+    std::size_t total = 0;
+    for (const auto& some : by_kind) total += some.size();
     std::vector<Option> options;
-    auto add = [&](std::vector<Option> more) {
-        for (auto& option : more) options.push_back(std::move(option));
-    };
-    add(propose_upstream_rcd(context));
-    add(propose_replacement_boards(context));
-    add(propose_rcbo_swaps(context));
-    add(propose_selectivity(context));
-    add(propose_electrodes(context));
-    add(propose_tails(context));
-    add(propose_manual_lines(context));
+    options.reserve(total);
+    for (auto& some : by_kind)
+        for (auto& option : some) options.push_back(std::move(option));
     return options;
 }
 

@@ -49,6 +49,7 @@ std::vector<Option> propose_rcbo_swaps(const ProposalContext& context) {
     std::set<const model::Circuit*> protected_30ma;
     for (const auto& chain : edits::final_circuit_chains(installation))
         if (has_30ma(chain.devices)) protected_30ma.insert(chain.circuit.circuit);
+    const edits::IdsInUse in_use(installation);
     for (const auto& board : installation.boards) {
         if (!board.accepts_rcbos) continue;
         std::vector<std::pair<std::string, std::string>> swaps;
@@ -57,7 +58,7 @@ std::vector<Option> propose_rcbo_swaps(const ProposalContext& context) {
             if (circuit.feeds_board_id) continue;
             if (circuit.device.kind != model::DeviceKind::circuit_breaker) continue;
             if (protected_30ma.count(&circuit)) continue;
-            swaps.emplace_back(circuit.id, edits::unused_id(installation, board.id + "-rcbo-" + circuit.id));
+            swaps.emplace_back(circuit.id, in_use.unused(board.id + "-rcbo-" + circuit.id));
             swapped.insert(circuit.id);
         }
         if (swaps.empty()) continue;

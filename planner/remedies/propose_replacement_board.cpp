@@ -43,12 +43,11 @@ void replace_board(model::Installation& installation, const BoardSpec& spec) {
     // New ids are chosen before the old devices go, against the whole installation.
     std::vector<std::string> old_ids;
     for (const auto& d : board->devices) old_ids.push_back(d.id);
-    const std::string incomer_id = edits::unused_id(installation, spec.board_id + "-new-incomer");
-    const std::string rcd_ids[2] = {edits::unused_id(installation, spec.board_id + "-new-rcd1"),
-                                    edits::unused_id(installation, spec.board_id + "-new-rcd2")};
+    const edits::IdsInUse in_use(installation);
+    const std::string incomer_id = in_use.unused(spec.board_id + "-new-incomer");
+    const std::string rcd_ids[2] = {in_use.unused(spec.board_id + "-new-rcd1"), in_use.unused(spec.board_id + "-new-rcd2")};
     std::vector<std::string> circuit_device_ids;
-    for (const auto& circuit : board->circuits)
-        circuit_device_ids.push_back(edits::unused_id(installation, spec.board_id + "-new-" + circuit.id));
+    for (const auto& circuit : board->circuits) circuit_device_ids.push_back(in_use.unused(spec.board_id + "-new-" + circuit.id));
     board = edits::board(installation, spec.board_id);
 
     model::Device incomer;

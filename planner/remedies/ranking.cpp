@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <map>
+#include <unordered_map>
 
 #include "planner/remedies/proposals.hpp"
 
@@ -77,8 +78,12 @@ bool ranks_before(const Option& a, const Option& b) {
 
 std::vector<FindingRanking> rank_by_finding(const std::vector<rules::Finding>& findings, const std::vector<Option>& options) {
     std::map<std::string, std::vector<const Option*>> by_finding;
-    for (const auto& option : options)
+    // Verification leaves `cleared` sorted, which allows a binary search; checked once per option.
+    std::unordered_map<const Option*, bool> cleared_sorted;
+    for (const auto& option : options) {
         for (const auto& id : option.targets) by_finding[id].push_back(&option);
+        cleared_sorted[&option] = std::is_sorted(option.verification.cleared.begin(), option.verification.cleared.end());
+    }
     std::vector<FindingRanking> rankings;
     for (const auto& finding : findings) {
         auto it = by_finding.find(finding.id);
@@ -90,8 +95,10 @@ std::vector<FindingRanking> rank_by_finding(const std::vector<rules::Finding>& f
             ranking.option_ids.push_back(option->id);
             std::string reason = option->id + ": ";
             if (option->ranked_last) reason += "last (introduces an urgent finding or clears nothing); ";
-            const bool clears_this = std::find(option->verification.cleared.begin(), option->verification.cleared.end(),
-                                               finding.id) != option->verification.cleared.end();
+            const auto& cleared = option->verification.cleared;
+            const bool clears_this = cleared_sorted.at(option)
+                                         ? std::binary_search(cleared.begin(), cleared.end(), finding.id)
+                                         : std::find(cleared.begin(), cleared.end(), finding.id) != cleared.end();
             reason += clears_this ? "clears it" : "does not clear it";
             reason += option->verification.clears_every_urgent_target ? ", clears every urgent target" : ", leaves an urgent target open";
             reason += ", " + (option->cost.priced ? money_text(option->cost.total_pence) : std::string("not priced"));

@@ -1,5 +1,7 @@
 #include "planner/remedies/report_json.hpp"
 
+#include "planner/remedies/parallel.hpp"
+
 namespace mendwright::remedies {
 
 using nlohmann::json;
@@ -61,9 +63,10 @@ json option_json(const Option& option) {
 }
 
 json options_json(const std::vector<Option>& options, const std::vector<FindingRanking>& rankings) {
-    json list = json::array();
-    list.get_ref<json::array_t&>().reserve(options.size());
-    for (const auto& option : options) list.push_back(option_json(option));
+    // Each option's object is its own: they are built across the cores, then put in order.
+    json::array_t built(options.size());
+    run_in_parallel(options.size(), [&](std::size_t i) { built[i] = option_json(options[i]); });
+    json list = std::move(built);
     json by_finding = json::array();
     by_finding.get_ref<json::array_t&>().reserve(rankings.size());
     for (const auto& ranking : rankings) {

@@ -93,21 +93,43 @@ struct Verifier::BoardTree {
     std::unordered_map<std::string, std::vector<std::string>> children;
     std::unordered_map<std::string, const model::Circuit*> feeder;
     std::unordered_map<std::string, const model::Board*> board;
+    // A plain tree: board ids unique, each board fed by at most one circuit, no loop. Only then
+    // are the boards of the chain above a view cut down to their feeding circuits (plan_view).
+    bool plain = true;
+};
+
+// Which boards a view of `touched` keeps, and which of them the option may change.
+struct Verifier::ViewPlan {
+    std::set<std::string> keep;
+    std::set<std::string> changeable;  // the touched boards and every board below them
+    // Boards of `keep` that are only the chain above (no RCD or RCBO of a touched board's chain
+    // at or below them): the view holds their devices and the circuits feeding boards of the
+    // view, not their other circuits. Empty unless the board tree is plain.
+    std::set<std::string> chain_only;
 };
 
 namespace {
 
 using BoardTree = Verifier::BoardTree;
+using ViewPlan = Verifier::ViewPlan;
 
 BoardTree board_tree(const model::Installation& installation) {
     BoardTree tree;
     for (const auto& board : installation.boards) {
-        tree.board.emplace(board.id, &board);
+        if (!tree.board.emplace(board.id, &board).second) tree.plain = false;  // two boards, one id
         for (const auto& circuit : board.circuits) {
             if (!circuit.feeds_board_id) continue;
-            tree.parent.emplace(*circuit.feeds_board_id, board.id);
+            if (!tree.parent.emplace(*circuit.feeds_board_id, board.id).second) tree.plain = false;  // fed twice
             tree.feeder.emplace(*circuit.feeds_board_id, &circuit);
             tree.children[board.id].push_back(*circuit.feeds_board_id);
+        }
+    }
+    for (const auto& board : installation.boards) {  // a loop never reaches a board without a parent
+        std::string current = board.id;
+        std::size_t hops = 0;
+        for (auto up = tree.parent.find(current); up != tree.parent.end() && tree.plain; up = tree.parent.find(current)) {
+            current = up->second;
+            if (++hops > installation.boards.size()) tree.plain = false;
         }
     }
     return tree;
@@ -126,11 +148,6 @@ void add_subtree(const BoardTree& tree, const std::string& top, std::set<std::st
     }
 }
 
-// Which boards a view of `touched` keeps, and which of them the option may change.
-struct ViewPlan {
-    std::set<std::string> keep;
-    std::set<std::string> changeable;  // the touched boards and every board below them
-};
 
 // The touched boards and everything below them; the chain of boards above them; and, so that
 // the rules adding up over every circuit below an RCD (standing leakage, trip times) see all of
@@ -139,6 +156,7 @@ ViewPlan plan_view(const model::Installation& installation, const BoardTree& tre
     ViewPlan plan;
     for (const auto& id : touched) add_subtree(tree, id, plan.changeable);
     plan.keep = plan.changeable;
+    std::set<std::string> whole_boards = plan.changeable;  // kept with every circuit
     for (const auto& id : touched) {
         std::string current = id;
         std::string furthest_rcd_board;
@@ -162,30 +180,68 @@ ViewPlan plan_view(const model::Installation& installation, const BoardTree& tre
             current = parent->id;
             plan.keep.insert(current);
         }
-        if (!furthest_rcd_board.empty()) add_subtree(tree, furthest_rcd_board, plan.keep);
+        if (!furthest_rcd_board.empty()) {
+            add_subtree(tree, furthest_rcd_board, plan.keep);
+            add_subtree(tree, furthest_rcd_board, whole_boards);
+        }
     }
+    if (tree.plain)
+        for (const auto& id : plan.keep)
+            if (!whole_boards.count(id)) plan.chain_only.insert(id);
     return plan;
 }
 
-std::string view_key(const std::set<std::string>& boards) {
+std::string view_key(const ViewPlan& plan) {
     std::string key;
-    for (const auto& id : boards) key += id + "\n";
+    for (const auto& id : plan.keep) key += id + "\n";
+    key += "chain only:\n";
+    for (const auto& id : plan.chain_only) key += id + "\n";
     return key;
 }
 
-// A view's boards and observations, by pointer into the installation (in its order).
+// A board of the chain above a view: its own fields and devices, and of its circuits only those
+// feeding a board of the view. (A field added to model::Board must be copied here too.)
+model::Board chain_board(const model::Board& board, const std::set<std::string>& keep) {
+    model::Board cut;
+    cut.id = board.id;
+    cut.name = board.name;
+    cut.location = board.location;
+    cut.enclosure = board.enclosure;
+    cut.spare_ways = board.spare_ways;
+    cut.accepts_rcbos = board.accepts_rcbos;
+    cut.surge_protection_fitted = board.surge_protection_fitted;
+    cut.new_work = board.new_work;
+    cut.devices = board.devices;
+    for (const auto& circuit : board.circuits)
+        if (circuit.feeds_board_id && keep.count(*circuit.feeds_board_id)) cut.circuits.push_back(circuit);
+    return cut;
+}
+
+// A view's boards and observations in the installation's order, by pointer into the
+// installation, or into `cut` for the boards of the chain above.
 struct ViewParts {
     std::vector<const model::Board*> boards;
     std::vector<const model::Observation*> observations;
+    std::vector<model::Board> cut;  // reserved up front: `boards` points into it
+
+    ViewParts() = default;
+    ViewParts(const ViewParts&) = delete;
+    ViewParts& operator=(const ViewParts&) = delete;
 };
 
-ViewParts view_parts(const model::Installation& installation, const std::set<std::string>& keep) {
-    ViewParts parts;
-    for (const auto& board : installation.boards)
-        if (keep.count(board.id)) parts.boards.push_back(&board);
+void fill_view_parts(const model::Installation& installation, const ViewPlan& plan, ViewParts& parts) {
+    parts.cut.reserve(plan.chain_only.size());
+    for (const auto& board : installation.boards) {
+        if (!plan.keep.count(board.id)) continue;
+        if (plan.chain_only.count(board.id)) {
+            parts.cut.push_back(chain_board(board, plan.keep));
+            parts.boards.push_back(&parts.cut.back());
+        } else {
+            parts.boards.push_back(&board);
+        }
+    }
     for (const auto& observation : installation.observations)
-        if (!observation.board_id || keep.count(*observation.board_id)) parts.observations.push_back(&observation);
-    return parts;
+        if (!observation.board_id || plan.keep.count(*observation.board_id)) parts.observations.push_back(&observation);
 }
 
 model::Installation view_of(const model::Installation& installation, const ViewParts& parts) {
@@ -201,8 +257,10 @@ model::Installation view_of(const model::Installation& installation, const ViewP
     return view;
 }
 
-model::Installation view_of(const model::Installation& installation, const std::set<std::string>& keep) {
-    return view_of(installation, view_parts(installation, keep));
+model::Installation view_of(const model::Installation& installation, const ViewPlan& plan) {
+    ViewParts parts;
+    fill_view_parts(installation, plan, parts);
+    return view_of(installation, parts);
 }
 
 // Whether the option, applied to the view (`before`: its parts in `installation`), changed
@@ -246,7 +304,7 @@ bool changes_confined(const model::Installation& installation, const ViewParts& 
 }  // namespace
 
 model::Installation board_view(const model::Installation& installation, const std::vector<std::string>& boards) {
-    return view_of(installation, plan_view(installation, board_tree(installation), boards).keep);
+    return view_of(installation, plan_view(installation, board_tree(installation), boards));
 }
 
 // The findings (verdicts only) of a view of the surveyed installation, kept per set of boards.
@@ -287,15 +345,17 @@ Verifier::Route Verifier::route_of(const Option& option) const {
     // recorded, say) may rest on boards the view leaves out.
     for (const auto& id : option.targets) {
         const auto found = baseline_boards_.find(id);
-        if (found == baseline_boards_.end() || found->second.empty() || !route.plan.keep.count(found->second)) return route;
+        if (found == baseline_boards_.end() || found->second.empty() || !route.plan.keep.count(found->second) ||
+            route.plan.chain_only.count(found->second))
+            return route;
     }
     route.whole = false;
-    route.key = view_key(route.plan.keep);
+    route.key = view_key(route.plan);
     return route;
 }
 
-std::unique_ptr<const Verifier::ViewBaseline> Verifier::view_baseline(const std::set<std::string>& keep) const {
-    return std::make_unique<const ViewBaseline>(assess_(view_of(installation_, keep), rules::FindingDetail::verdict));
+std::unique_ptr<const Verifier::ViewBaseline> Verifier::view_baseline(const ViewPlan& plan) const {
+    return std::make_unique<const ViewBaseline>(assess_(view_of(installation_, plan), rules::FindingDetail::verdict));
 }
 
 Verification Verifier::verify(const Option& option) {
@@ -303,7 +363,7 @@ Verification Verifier::verify(const Option& option) {
     if (route.whole) return verify_whole(option);
     // Before: the view of the surveyed installation (kept per set of boards).
     auto cached = view_baselines_.find(route.key);
-    if (cached == view_baselines_.end()) cached = view_baselines_.emplace(route.key, view_baseline(route.plan.keep)).first;
+    if (cached == view_baselines_.end()) cached = view_baselines_.emplace(route.key, view_baseline(route.plan)).first;
     return verify_on_view(option, route, *cached->second);
 }
 
@@ -312,12 +372,12 @@ Verification Verifier::verify_prepared(const Option& option) const {
     if (route.whole) return verify_whole(option);
     const auto cached = view_baselines_.find(route.key);
     if (cached != view_baselines_.end()) return verify_on_view(option, route, *cached->second);
-    const auto before = view_baseline(route.plan.keep);
+    const auto before = view_baseline(route.plan);
     return verify_on_view(option, route, *before);
 }
 
 void Verifier::prepare(const std::vector<Option>& options) {
-    std::vector<const std::set<std::string>*> wanted;
+    std::vector<const ViewPlan*> wanted;
     std::vector<std::string> keys;
     std::vector<Route> routes;
     routes.reserve(options.size());
@@ -326,7 +386,7 @@ void Verifier::prepare(const std::vector<Option>& options) {
         routes.push_back(route_of(option));
         const Route& route = routes.back();
         if (route.whole || view_baselines_.count(route.key) || !seen.insert(route.key).second) continue;
-        wanted.push_back(&route.plan.keep);
+        wanted.push_back(&route.plan);
         keys.push_back(route.key);
     }
     std::vector<std::unique_ptr<const ViewBaseline>> made(wanted.size());
@@ -337,7 +397,8 @@ void Verifier::prepare(const std::vector<Option>& options) {
 Verification Verifier::verify_on_view(const Option& option, const Route& route, const ViewBaseline& baseline) const {
     // After: the option applied to a copy of that same view; it must have changed only the
     // boards it touches (and those below), or the whole installation is assessed instead.
-    const ViewParts parts = view_parts(installation_, route.plan.keep);
+    ViewParts parts;
+    fill_view_parts(installation_, route.plan, parts);
     model::Installation changed = view_of(installation_, parts);
     if (option.apply) option.apply(changed);
     if (!changes_confined(installation_, parts, changed, route.plan.changeable)) return verify_whole(option);

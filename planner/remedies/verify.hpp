@@ -79,7 +79,8 @@ class Verifier {
 public:
     struct BoardTree;  // parents, children and feeding circuits by board id (verify.cpp)
 
-    struct ViewBaseline;  // a view of the surveyed installation and its findings (verify.cpp)
+    struct ViewPlan;      // which boards a view keeps, whole or cut down (verify.cpp)
+    struct ViewBaseline;  // the findings of a view of the surveyed installation (verify.cpp)
     struct FindingIndex;  // finding id -> whether it is urgent (verify.cpp)
 
     Verifier(const model::Installation& installation, Assessor assess);
@@ -123,7 +124,7 @@ private:
 
     struct Route;  // whole installation, or a view (verify.cpp)
     [[nodiscard]] Route route_of(const Option& option) const;
-    [[nodiscard]] std::unique_ptr<const ViewBaseline> view_baseline(const std::set<std::string>& keep) const;
+    [[nodiscard]] std::unique_ptr<const ViewBaseline> view_baseline(const ViewPlan& plan) const;
     [[nodiscard]] Verification verify_on_view(const Option& option, const Route& route, const ViewBaseline& before) const;
 };
 

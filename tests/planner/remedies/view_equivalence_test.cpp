@@ -117,3 +117,40 @@ TEST_CASE("remedies view verification: an RCD feeding two boards keeps its slow-
     }
     CHECK(swaps == 1);
 }
+
+TEST_CASE("remedies view verification: boards of the chain above keep only their feeding circuits, verdicts unchanged",
+          "[remedies][verify][equivalence]") {
+    // Invented: board top feeds mid, mid feeds leaf; no RCD anywhere above leaf. A view of leaf
+    // holds top and mid with their devices and only the circuits feeding the view's boards.
+    using namespace remedy_test;
+    model::Installation installation = remedy_test::random_installation(5, 1, 4);
+    installation.boards.clear();
+    for (const std::string id : {"top", "mid", "leaf"}) {
+        model::Board b;
+        b.id = id;
+        b.name = "Invented board " + id;
+        b.accepts_rcbos = true;
+        b.devices = {main_switch(id + "-ms")};
+        for (int c = 1; c <= 3; ++c)
+            b.circuits.push_back(circuit(id + "-c" + std::to_string(c), "Sockets", model::CircuitUse::sockets,
+                                         breaker(id + "-cb" + std::to_string(c), 32), id + "-ms", 1.0));
+        installation.boards.push_back(b);
+    }
+    installation.boards[0].circuits[1].feeds_board_id = "mid";
+    installation.boards[1].circuits[2].feeds_board_id = "leaf";
+    const model::Installation view = remedies::board_view(installation, {"leaf"});
+    REQUIRE(view.boards.size() == 3);
+    CHECK(view.boards[0].id == "top");
+    REQUIRE(view.boards[0].circuits.size() == 1);
+    CHECK(view.boards[0].circuits[0].id == "top-c2");
+    CHECK(view.boards[0].devices == installation.boards[0].devices);
+    REQUIRE(view.boards[1].circuits.size() == 1);
+    CHECK(view.boards[1].circuits[0].id == "mid-c3");
+    CHECK(view.boards[2] == installation.boards[2]);
+    // And every option's verdict on such chains still equals the whole installation's.
+    CHECK(compare_every_option(installation, "chain of three") > 0);
+    int compared = 0;
+    for (unsigned seed = 201; seed <= 215; ++seed)
+        compared += compare_every_option(random_installation(seed, 12, 4), "seed " + std::to_string(seed));
+    CHECK(compared > 100);
+}
