@@ -1,7 +1,7 @@
 #include "planner/remedies/ranking.hpp"
 
 #include <algorithm>
-#include <map>
+#include <string_view>
 #include <unordered_map>
 
 #include "planner/remedies/proposals.hpp"
@@ -77,7 +77,7 @@ bool ranks_before(const Option& a, const Option& b) {
 }
 
 std::vector<FindingRanking> rank_by_finding(const std::vector<rules::Finding>& findings, const std::vector<Option>& options) {
-    std::map<std::string, std::vector<const Option*>> by_finding;
+    std::unordered_map<std::string_view, std::vector<const Option*>> by_finding;  // ids held by the options
     // Verification leaves `cleared` sorted, which allows a binary search; checked once per option.
     std::unordered_map<const Option*, bool> cleared_sorted;
     for (const auto& option : options) {
@@ -88,7 +88,7 @@ std::vector<FindingRanking> rank_by_finding(const std::vector<rules::Finding>& f
     for (const auto& finding : findings) {
         auto it = by_finding.find(finding.id);
         if (it == by_finding.end()) continue;
-        auto list = it->second;
+        auto& list = it->second;  // sorted in place: sorting it again for a repeated id changes nothing
         std::stable_sort(list.begin(), list.end(), [](const Option* a, const Option* b) { return ranks_before(*a, *b); });
         FindingRanking ranking{finding.id, finding.code, {}, {}};
         for (const Option* option : list) {

@@ -96,33 +96,51 @@ AssessContext::AssessContext(const model::Installation& installation, const Rule
         }
     }
 
+    // Every chain is put in refs_ first (offsets only: refs_ grows), then the spans are set.
+    struct Extent {
+        std::size_t chain_begin = 0, chain_size = 0, residual_begin = 0, residual_size = 0;
+    };
+    std::vector<Extent> extents;
+    extents.reserve(circuit_count);
     circuits_.reserve(circuit_count);
+    std::vector<model::DeviceRef> chain;
     for (std::size_t b = 0; b < board_count; ++b) {
         const auto& board = installation.boards[b];
         for (std::size_t c = 0; c < board.circuits.size(); ++c) {
-            CircuitEntry entry{&board, &board.circuits[c], b, c, {}, {}};
+            chain.clear();
             if (!looped) {
-                const auto& higher = above[b];
-                entry.chain.reserve(1 + board.devices.size() + higher.size());
-                entry.chain.push_back({&board, &board.circuits[c].device, &board.circuits[c]});
-                append_board_devices(board, board.circuits[c].upstream_id, entry.chain);
-                entry.chain.insert(entry.chain.end(), higher.begin(), higher.end());
+                chain.push_back({&board, &board.circuits[c].device, &board.circuits[c]});
+                append_board_devices(board, board.circuits[c].upstream_id, chain);
+                chain.insert(chain.end(), above[b].begin(), above[b].end());
             } else {
                 const model::Board* current_board = &board;
                 const model::Circuit* current_circuit = &board.circuits[c];
                 for (std::size_t hops = 0; current_board && current_circuit && hops <= board_count; ++hops) {
-                    entry.chain.push_back({current_board, &current_circuit->device, current_circuit});
-                    append_board_devices(*current_board, current_circuit->upstream_id, entry.chain);
+                    chain.push_back({current_board, &current_circuit->device, current_circuit});
+                    append_board_devices(*current_board, current_circuit->upstream_id, chain);
                     const auto found = feeder_of.find(current_board->id);
                     if (found == feeder_of.end()) break;
                     current_board = found->second.board;
                     current_circuit = found->second.circuit;
                 }
             }
-            for (const auto& ref : entry.chain)
-                if (model::is_residual_current_device(*ref.device)) entry.residual_current_devices.push_back(ref);
-            circuits_.push_back(std::move(entry));
+            Extent extent;
+            extent.chain_begin = refs_.size();
+            extent.chain_size = chain.size();
+            refs_.insert(refs_.end(), chain.begin(), chain.end());
+            extent.residual_begin = refs_.size();
+            for (const auto& ref : chain)
+                if (model::is_residual_current_device(*ref.device)) refs_.push_back(ref);
+            extent.residual_size = refs_.size() - extent.residual_begin;
+            extents.push_back(extent);
+            circuits_.push_back(CircuitEntry{&board, &board.circuits[c], b, c, {}, {}});
         }
+    }
+    const model::DeviceRef* base = refs_.data();
+    for (std::size_t i = 0; i < circuits_.size(); ++i) {
+        circuits_[i].chain = std::span<const model::DeviceRef>(base + extents[i].chain_begin, extents[i].chain_size);
+        circuits_[i].residual_current_devices =
+            std::span<const model::DeviceRef>(base + extents[i].residual_begin, extents[i].residual_size);
     }
 }
 
@@ -186,7 +204,7 @@ std::optional<double> AssessContext::required_disconnection_time_s(const Circuit
 Finding AssessContext::new_finding(std::string_view rule_id, std::string_view case_name, const std::string& location_key,
                                    const model::Board* board, const model::Circuit* circuit,
                                    const model::Device* device) const {
-    const RuleCase& rule_case = profile_.rule_case(std::string(rule_id), std::string(case_name));
+    const RuleCase& rule_case = profile_.rule_case(rule_id, case_name);
     Finding finding;
     finding.rule = std::string(rule_id);
     finding.id = finding.rule + "@" + location_key;

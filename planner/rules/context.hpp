@@ -4,6 +4,7 @@
 // itself and assess stays linear in the size of the installation.
 
 #include <optional>
+#include <span>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -22,8 +23,10 @@ struct CircuitEntry {
     const model::Circuit* circuit = nullptr;
     std::size_t board_index = 0;    // position in installation.boards
     std::size_t circuit_index = 0;  // position in board.circuits
-    std::vector<model::DeviceRef> chain;
-    std::vector<model::DeviceRef> residual_current_devices;  // RCDs and RCBOs of `chain`, nearest first
+    // Both point into the context's own storage (one list for all circuits, not two per circuit)
+    // and live as long as the context.
+    std::span<const model::DeviceRef> chain;
+    std::span<const model::DeviceRef> residual_current_devices;  // RCDs and RCBOs of `chain`, nearest first
 
     [[nodiscard]] bool is_submain() const { return circuit->feeds_board_id.has_value(); }
 };
@@ -32,6 +35,8 @@ class AssessContext {
 public:
     AssessContext(const model::Installation& installation, const RulesProfile& profile,
                   FindingDetail detail = FindingDetail::full);
+    AssessContext(const AssessContext&) = delete;  // the entries point into refs_
+    AssessContext& operator=(const AssessContext&) = delete;
 
     [[nodiscard]] const model::Installation& installation() const { return installation_; }
     [[nodiscard]] const RulesProfile& profile() const { return profile_; }
@@ -73,6 +78,7 @@ private:
     const RulesProfile& profile_;
     FindingDetail detail_;
     std::vector<CircuitEntry> circuits_;
+    std::vector<model::DeviceRef> refs_;  // every entry's chain, then its residual current devices
 };
 
 }  // namespace mendwright::rules

@@ -1,5 +1,7 @@
 #include "planner/rules/profile.hpp"
 
+#include <stdexcept>
+
 #include <cmath>
 #include <set>
 #include <string>
@@ -178,8 +180,8 @@ DueDates read_due_dates(ObjectReader object) {
     return due;
 }
 
-std::map<std::string, std::map<std::string, RuleCase>> read_rules(ObjectReader object) {
-    std::map<std::string, std::map<std::string, RuleCase>> rules;
+decltype(RulesProfile::rules) read_rules(ObjectReader object) {
+    decltype(RulesProfile::rules) rules;
     for (const auto& spec : rule_table()) {
         if (spec.cases.empty()) continue;  // rules whose code comes from elsewhere (recorded observations)
         ObjectReader rule(object.at(spec.id), object.path(spec.id));
@@ -231,9 +233,15 @@ RulesProfile read_profile(const json& document) {
 
 }  // namespace
 
-const RuleCase& RulesProfile::rule_case(const std::string& rule_id, const std::string& case_name) const {
-    // A parsed profile holds every case of the rule table; reaching past it is a programming error.
-    return rules.at(rule_id).at(case_name);
+const RuleCase& RulesProfile::rule_case(std::string_view rule_id, std::string_view case_name) const {
+    // A parsed profile holds every case of the rule table; reaching past it is a programming error
+    // (std::out_of_range, as map::at gives).
+    const auto rule = rules.find(rule_id);
+    if (rule == rules.end()) throw std::out_of_range("rules profile: no rule " + std::string(rule_id));
+    const auto found = rule->second.find(case_name);
+    if (found == rule->second.end())
+        throw std::out_of_range("rules profile: no case " + std::string(case_name) + " of rule " + std::string(rule_id));
+    return found->second;
 }
 
 Result<RulesProfile> parse_rules_profile(std::string_view json_text) {

@@ -113,11 +113,12 @@ struct RulesProfile {
     BreakingCapacityLimits breaking_capacity;
     DueDates due_dates;
     // rule id -> case name -> code and clause; every rule and case of the rule table is present.
-    std::map<std::string, std::map<std::string, RuleCase>> rules;
+    // (std::less<> lets rule_case look up by string_view without making strings.)
+    std::map<std::string, std::map<std::string, RuleCase, std::less<>>, std::less<>> rules;
 
     // The code and clause of one case of a rule. The pair must be in the rule table (a profile
     // that parsed has every one).
-    [[nodiscard]] const RuleCase& rule_case(const std::string& rule_id, const std::string& case_name) const;
+    [[nodiscard]] const RuleCase& rule_case(std::string_view rule_id, std::string_view case_name) const;
 
     bool operator==(const RulesProfile&) const = default;
 };

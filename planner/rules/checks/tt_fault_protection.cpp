@@ -104,6 +104,9 @@ std::optional<Finding> without_rcd(const AssessContext& context, const CircuitEn
 std::vector<Finding> tt_fault_protection(const AssessContext& context) {
     std::vector<Finding> findings;
     if (!context.is_tt()) return findings;
+    // At most one finding per circuit and one for the installation: room for all at once, so the
+    // findings are not moved again as the list grows (only the part used is ever touched).
+    findings.reserve(context.circuits().size() + 1);
     const auto ra_ohms = context.earth_resistance_ohms();
     const double limit_volts = context.profile().fault_protection.touch_voltage_limit_volts;
     bool needs_ra = false;
