@@ -4,6 +4,8 @@
 #include <cmath>
 #include <map>
 #include <set>
+#include <string_view>
+#include <unordered_map>
 
 #include "planner/core/checks.hpp"
 #include "planner/model/navigation.hpp"
@@ -21,37 +23,53 @@ std::string board_device_path(std::size_t b, std::size_t d) { return index_path(
 std::string circuit_path(std::size_t b, std::size_t c) { return index_path(board_path(b) + ".circuits", c); }
 std::string observation_path(std::size_t o) { return index_path("observations", o); }
 
-// First path seen for each id; reports later ones as duplicates.
+// Where an id was given, as indices; its JSON path is written out only for an error.
+struct IdPlace {
+    enum class Kind { board, board_device, circuit, circuit_device, observation } kind = Kind::board;
+    std::size_t first = 0, second = 0;
+
+    [[nodiscard]] std::string path() const {
+        switch (kind) {
+            case Kind::board: return board_path(first) + ".id";
+            case Kind::board_device: return board_device_path(first, second) + ".id";
+            case Kind::circuit: return circuit_path(first, second) + ".id";
+            case Kind::circuit_device: return circuit_path(first, second) + ".device.id";
+            case Kind::observation: return observation_path(first) + ".id";
+        }
+        return "";
+    }
+};
+
+// First place seen for each id; reports later ones as duplicates. Holds views of the ids, which
+// live in the installation being checked.
 class IdRegister {
 public:
     IdRegister(std::string what, Diagnostics& d) : what_(std::move(what)), d_(d) {}
-    void add(const std::string& id, const std::string& path) {
+    void add(const std::string& id, const IdPlace& place) {
         if (id.empty()) return;  // a missing id is already an error of its own
-        auto [it, inserted] = first_.emplace(id, path);
-        if (!inserted) d_.error(path, "duplicate " + what_ + " id " + q(id) + " (first used at " + it->second + ")");
+        auto [it, inserted] = first_.emplace(id, place);
+        if (!inserted) d_.error(place.path(), "duplicate " + what_ + " id " + q(id) + " (first used at " + it->second.path() + ")");
     }
-    [[nodiscard]] bool contains(const std::string& id) const { return first_.count(id) > 0; }
 
 private:
     std::string what_;
     Diagnostics& d_;
-    std::map<std::string, std::string> first_;
+    std::unordered_map<std::string_view, IdPlace> first_;
 };
 
 void check_ids(const Installation& inst, Diagnostics& d) {
+    using Kind = IdPlace::Kind;
     IdRegister boards("board", d), devices("device", d), circuits("circuit", d), observations("observation", d);
     for (std::size_t b = 0; b < inst.boards.size(); ++b) {
         const Board& board = inst.boards[b];
-        boards.add(board.id, board_path(b) + ".id");
-        for (std::size_t i = 0; i < board.devices.size(); ++i)
-            devices.add(board.devices[i].id, board_device_path(b, i) + ".id");
+        boards.add(board.id, {Kind::board, b, 0});
+        for (std::size_t i = 0; i < board.devices.size(); ++i) devices.add(board.devices[i].id, {Kind::board_device, b, i});
         for (std::size_t c = 0; c < board.circuits.size(); ++c) {
-            circuits.add(board.circuits[c].id, circuit_path(b, c) + ".id");
-            devices.add(board.circuits[c].device.id, circuit_path(b, c) + ".device.id");
+            circuits.add(board.circuits[c].id, {Kind::circuit, b, c});
+            devices.add(board.circuits[c].device.id, {Kind::circuit_device, b, c});
         }
     }
-    for (std::size_t o = 0; o < inst.observations.size(); ++o)
-        observations.add(inst.observations[o].id, observation_path(o) + ".id");
+    for (std::size_t o = 0; o < inst.observations.size(); ++o) observations.add(inst.observations[o].id, {Kind::observation, o, 0});
 }
 
 // An upstream_id must name one of the board's own distribution devices.

@@ -63,23 +63,26 @@ json option_json(const Option& option) {
 }
 
 json options_json(const std::vector<Option>& options, const std::vector<FindingRanking>& rankings) {
-    // Each option's object is its own: they are built across the cores, then put in order.
-    json::array_t built(options.size());
-    run_in_parallel(options.size(), [&](std::size_t i) { built[i] = option_json(options[i]); });
-    json list = std::move(built);
-    json by_finding = json::array();
-    by_finding.get_ref<json::array_t&>().reserve(rankings.size());
-    for (const auto& ranking : rankings) {
+    // Each option's object and each finding's ranking are their own: all are built across the
+    // cores (parallel.hpp), each into its own place, then put in order.
+    json::array_t built_options(options.size());
+    json::array_t built_rankings(rankings.size());
+    run_in_parallel(options.size() + rankings.size(), [&](std::size_t i) {
+        if (i < options.size()) {
+            built_options[i] = option_json(options[i]);
+            return;
+        }
+        const FindingRanking& ranking = rankings[i - options.size()];
         json entry = json::object();
         entry["finding"] = ranking.finding_id;
         entry["code"] = rules::code_text(ranking.code);
         entry["options"] = string_array(ranking.option_ids);
         entry["reasons"] = string_array(ranking.reasons);
-        by_finding.push_back(std::move(entry));
-    }
+        built_rankings[i - options.size()] = std::move(entry);
+    });
     json result = json::object();
-    result["options"] = std::move(list);
-    result["by_finding"] = std::move(by_finding);
+    result["options"] = std::move(built_options);
+    result["by_finding"] = std::move(built_rankings);
     return result;
 }
 
