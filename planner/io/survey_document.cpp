@@ -120,8 +120,120 @@ private:
     std::size_t depth_ = 0;
 };
 
+// Where the top-level "boards" array lies in the text, and each element's text: found by a
+// light scan (strings, escapes and nesting only). nullopt when the text is not plainly an object
+// with one such array of two or more elements; the text is then parsed in one go.
+struct BoardsInText {
+    std::size_t open = 0;   // the array's '['
+    std::size_t close = 0;  // its ']'
+    std::vector<std::string_view> elements;
+};
+
+std::optional<BoardsInText> find_boards(std::string_view text) {
+    constexpr std::size_t none = std::string_view::npos;
+    const auto is_space = [](char c) { return c == ' ' || c == '\t' || c == '\n' || c == '\r'; };
+    std::size_t i = 0;
+    while (i < text.size() && is_space(text[i])) ++i;
+    if (i == text.size() || text[i] != '{') return std::nullopt;
+    BoardsInText found;
+    bool seen = false, inside = false;
+    std::size_t depth = 0, element = none;
+    for (; i < text.size(); ++i) {
+        const char c = text[i];
+        if (is_space(c)) continue;
+        if (inside && depth == 2 && element == none && c != ']' && c != ',') element = i;
+        if (c == '"') {
+            const std::size_t start = i + 1;
+            for (++i; i < text.size() && text[i] != '"'; ++i)
+                if (text[i] == '\\') ++i;
+            if (i >= text.size()) return std::nullopt;
+            if (depth != 1) continue;
+            std::size_t next = i + 1;
+            while (next < text.size() && is_space(text[next])) ++next;
+            if (next >= text.size() || text[next] != ':' || text.substr(start, i - start) != "boards") continue;
+            if (seen) return std::nullopt;  // given twice: the one-go parse reports it
+            seen = true;
+            for (++next; next < text.size() && is_space(text[next]);) ++next;
+            if (next >= text.size() || text[next] != '[') return std::nullopt;
+            found.open = next;
+            inside = true;
+            depth = 2;
+            i = next;
+        } else if (c == '{' || c == '[') {
+            ++depth;
+        } else if (c == '}' || c == ']') {
+            if (depth == 0) return std::nullopt;
+            if (inside && depth == 2) {
+                if (c != ']') return std::nullopt;
+                if (element == none && !found.elements.empty()) return std::nullopt;  // a comma before ']'
+                if (element != none) found.elements.push_back(text.substr(element, i - element));
+                found.close = i;
+                inside = false;
+            }
+            --depth;
+        } else if (c == ',' && inside && depth == 2) {
+            if (element == none) return std::nullopt;
+            found.elements.push_back(text.substr(element, i - element));
+            element = none;
+        }
+    }
+    if (!seen || inside || depth != 0 || found.elements.size() < 2) return std::nullopt;
+    return found;
+}
+
+// One JSON value of the text, with the duplicate-key check; throws on malformed text.
+Json parse_value(std::string_view text, Diagnostics& d) {
+    Json value;
+    DuplicateKeyCheck handler(value, d);
+    Json::sax_parse(text.begin(), text.end(), &handler, nlohmann::detail::input_format_t::json, true, false);
+    return value;
+}
+
+// A large survey is mostly its boards: the rest of the document and the two halves of the boards
+// are parsed side by side, then the boards put in their array in order. Gives the same document,
+// or nullopt at the first sign of anything but a clean parse (malformed text, a repeated key):
+// the text is then parsed in one go, which reports it with the right line, column and path.
+std::optional<Json> parse_in_parts(std::string_view text) {
+    const std::optional<BoardsInText> boards = find_boards(text);
+    if (!boards) return std::nullopt;
+    const std::size_t count = boards->elements.size();
+    std::vector<Json> parsed(count);
+    std::vector<char> clean(count, 0);
+    Json root;
+    bool rest_clean = false;
+    in_two_halves(count, [&](std::size_t begin, std::size_t end) {
+        if (end == count) {  // this thread's half: the rest of the document too
+            std::string rest;
+            rest.reserve(text.size() - (boards->close - boards->open) + 1);
+            rest.append(text.substr(0, boards->open + 1)).append(text.substr(boards->close));
+            try {
+                Diagnostics notes;
+                root = parse_value(rest, notes);
+                rest_clean = notes.items.empty();
+            } catch (const std::exception&) {
+            }
+        }
+        for (std::size_t i = begin; i < end; ++i) {
+            try {
+                Diagnostics notes;
+                parsed[i] = parse_value(boards->elements[i], notes);
+                clean[i] = notes.items.empty() ? 1 : 0;
+            } catch (const std::exception&) {
+            }
+        }
+    });
+    if (!rest_clean || std::find(clean.begin(), clean.end(), 0) != clean.end() || !root.is_object()) return std::nullopt;
+    const auto slot = root.find("boards");
+    if (slot == root.end() || !slot->is_array() || !slot->empty()) return std::nullopt;
+    auto& list = slot->get_ref<Json::array_t&>();
+    list.reserve(count);
+    for (auto& board : parsed) list.push_back(std::move(board));
+    return root;
+}
+
 // Parses the text, recording each key that appears twice in one object.
 std::optional<Json> parse_json(std::string_view text, Diagnostics& d) {
+    if (std::optional<Json> whole = parse_in_parts(text)) return whole;
     try {
         Json root;
         DuplicateKeyCheck handler(root, d);
