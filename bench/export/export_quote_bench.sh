@@ -44,6 +44,7 @@ for b in $(seq "$blocks"); do
   block "${theirs[@]}" >> "$work/theirs.txt"
 done
 echo "load after:  $(uptime)"
+echo "blocks, ours (wall cpu):   $(tr "\n" ";" < "$work/ours.txt")"; echo "blocks, openpyxl (wall cpu): $(tr "\n" ";" < "$work/theirs.txt")"
 ours_s=$(cut -d' ' -f1 "$work/ours.txt" | median); ours_cpu=$(cut -d' ' -f2 "$work/ours.txt" | median)
 theirs_s=$(cut -d' ' -f1 "$work/theirs.txt" | median); theirs_cpu=$(cut -d' ' -f2 "$work/theirs.txt" | median)
 ours_kb=$(peak_kb "${ours[@]}"); theirs_kb=$(peak_kb "${theirs[@]}")

@@ -29,6 +29,7 @@ Result<CostedLine> cost_line(const PriceBook& book, const BillLine& line, const 
 
 Result<CostedBill> cost_bill(const PriceBook& book, const std::vector<BillLine>& bill, std::string_view owner) {
     CostedBill costed;
+    costed.lines.reserve(bill.size());
     for (std::size_t i = 0; i < bill.size(); ++i) {
         const BillLine& line = bill[i];
         // A missing code names the owner alone, as the remedies module reports it.

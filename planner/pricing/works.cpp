@@ -30,6 +30,7 @@ std::optional<Problem> requantify(CostedLine& line, double quantity, const Prici
 Result<WorksList> build_works_list(const PriceBook& book, const std::vector<OptionBill>& options) {
     WorksList works;
     works.settings = book.settings;
+    works.groups.reserve(options.size());
     std::set<std::string> seen;
     for (const auto& option : options) {
         if (option.option_id.empty()) return problem("options", "expected every option to have an id, got an empty one");
