@@ -2,8 +2,6 @@
 
 #include <algorithm>
 #include <cmath>
-#include <exception>
-#include <thread>
 
 #include "planner/core/checks.hpp"
 
@@ -45,31 +43,6 @@ std::optional<long long> whole_number_of(const Json& value) {
 
 std::string field_path(const std::string& parent, std::string_view key) {
     return parent.empty() ? std::string(key) : parent + "." + std::string(key);
-}
-
-void in_two_halves(std::size_t count, const std::function<void(std::size_t begin, std::size_t end)>& work) {
-    const std::size_t middle = count / 2;
-    std::exception_ptr helper_error;
-    std::thread helper;
-    try {
-        helper = std::thread([&] {
-            try {
-                work(0, middle);
-            } catch (...) {
-                helper_error = std::current_exception();
-            }
-        });
-    } catch (...) {  // no thread to be had: this thread does both halves
-        work(0, middle);
-    }
-    try {
-        work(middle, count);
-    } catch (...) {
-        if (helper.joinable()) helper.join();
-        throw;
-    }
-    if (helper.joinable()) helper.join();
-    if (helper_error) std::rethrow_exception(helper_error);
 }
 
 std::string index_path(const std::string& parent, std::size_t index) {

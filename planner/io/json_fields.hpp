@@ -5,7 +5,6 @@
 
 #include <nlohmann/json.hpp>
 
-#include <functional>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -37,12 +36,6 @@ std::optional<long long> whole_number_of(const Json& value);
 // "boards[0]" + "id" -> "boards[0].id"; "" + "job" -> "job".
 std::string field_path(const std::string& parent, std::string_view key);
 std::string index_path(const std::string& parent, std::size_t index);
-
-// Independent work on `count` pieces done in two halves: work(0, count / 2) on a helper thread
-// and work(count / 2, count) on this one, then joined (all on this thread when no thread can be
-// started). Each piece must write only to a place of its own. An exception from the helper's half
-// is rethrown here after both halves are done.
-void in_two_halves(std::size_t count, const std::function<void(std::size_t begin, std::size_t end)>& work);
 
 enum class Need { required, optional };
 

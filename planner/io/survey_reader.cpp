@@ -218,24 +218,9 @@ Installation read_installation(const Json& root, Diagnostics& d) {
     installation.supply = read_supply(r, d);
     installation.electrode = read_electrode(r, d);
     installation.tails = read_tails(r, d);
-    // The boards are read in two halves side by side, each board into its own diagnostics, then
-    // taken in order: the same boards and messages, in the same order, as one by one.
-    if (const Json* boards = &member_or_null(root, "boards"); boards->is_array() && boards->size() >= 2) {
-        r.field("boards", Need::required, "expected an array");
-        const std::size_t count = boards->size();
-        std::vector<Board> read(count);
-        std::vector<Diagnostics> notes(count);
-        in_two_halves(count, [&](std::size_t begin, std::size_t end) {
-            for (std::size_t i = begin; i < end; ++i) read[i] = read_board((*boards)[i], index_path("boards", i), notes[i]);
-        });
-        installation.boards = std::move(read);
-        for (auto& board_notes : notes)
-            for (auto& item : board_notes.items) d.items.push_back(std::move(item));
-    } else {
-        for_each_element(r, "boards", Need::required, d, [&](const Json& element, const std::string& path) {
-            installation.boards.push_back(read_board(element, path, d));
-        });
-    }
+    for_each_element(r, "boards", Need::required, d, [&](const Json& element, const std::string& path) {
+        installation.boards.push_back(read_board(element, path, d));
+    });
     if (member_or_null(root, "boards").is_array() && installation.boards.empty())
         d.error("boards", "expected at least one board (the one the meter tails land on)");
     for_each_element(r, "observations", Need::optional, d, [&](const Json& element, const std::string& path) {
