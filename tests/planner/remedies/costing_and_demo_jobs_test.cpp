@@ -2,10 +2,7 @@
 // invented demo jobs (pricebook-demo/jobs) against what a contractor would expect.
 #include <catch2/catch.hpp>
 
-#include <fstream>
-#include <sstream>
 
-#include "planner/io/survey_document.hpp"
 #include "planner/remedies/plans.hpp"
 #include "tests/planner/remedies/remedy_fixtures.hpp"
 
@@ -56,13 +53,8 @@ pricing::PriceBook demo_book_for_jobs() {
 }
 
 std::unique_ptr<DemoJob> demo_job(const std::string& name) {
-    std::ifstream stream(std::string(MENDWRIGHT_SOURCE_DIR) + "/pricebook-demo/jobs/" + name);
-    std::stringstream text;
-    text << stream.rdbuf();
-    auto load = io::read_survey(text.str());
-    REQUIRE(load.ok());
     auto job = std::make_unique<DemoJob>();
-    job->installation = *load.installation;
+    job->installation = remedy_test::read_demo_job(name);
     static const pricing::PriceBook book = demo_book_for_jobs();
     job->analysis = std::make_unique<remedies::Analysis>(
         remedies::analyse(job->installation, remedy_test::shipped_rules(), book, remedy_test::shipped_settings()));

@@ -6,13 +6,9 @@
 #include <catch2/catch.hpp>
 
 #include <atomic>
-#include <filesystem>
-#include <fstream>
-#include <sstream>
 #include <stdexcept>
 #include <vector>
 
-#include "planner/io/survey_document.hpp"
 #include "planner/remedies/parallel.hpp"
 #include "planner/remedies/proposals.hpp"
 #include "planner/remedies/verify.hpp"
@@ -54,20 +50,9 @@ int compare_shared_with_serial(const model::Installation& installation, const st
 }  // namespace
 
 TEST_CASE("remedies parallel verification: the same verdicts as one by one on the demo jobs", "[remedies][verify][parallel]") {
-    const std::filesystem::path folder = std::filesystem::path(MENDWRIGHT_SOURCE_DIR) / "pricebook-demo" / "jobs";
-    int jobs = 0;
-    for (const auto& entry : std::filesystem::directory_iterator(folder)) {
-        if (entry.path().extension() != ".json") continue;
-        std::ifstream stream(entry.path());
-        std::stringstream text;
-        text << stream.rdbuf();
-        const auto load = io::read_survey(text.str());
-        INFO(entry.path().string());
-        REQUIRE(load.ok());
-        CHECK(compare_shared_with_serial(*load.installation, entry.path().filename().string()) > 0);
-        ++jobs;
-    }
-    CHECK(jobs == 3);
+    const auto jobs = remedy_test::demo_installations();
+    for (const auto& job : jobs) CHECK(compare_shared_with_serial(job.installation, job.file_name) > 0);
+    CHECK(jobs.size() == 3);
 }
 
 TEST_CASE("remedies parallel verification: the same verdicts as one by one on seeded random installations",

@@ -2,10 +2,16 @@
 // Invented installations for the remedies tests (no real people, places or products), and a
 // helper that runs the whole remedies step with the shipped rules profile and the demo price book.
 
+#include <algorithm>
+#include <catch2/catch.hpp>
+#include <filesystem>
+#include <fstream>
 #include <optional>
+#include <sstream>
 #include <string>
 #include <vector>
 
+#include "planner/io/survey_document.hpp"
 #include "planner/model/installation.hpp"
 #include "planner/pricing/price_book.hpp"
 #include "planner/remedies/analysis.hpp"
@@ -112,6 +118,34 @@ inline const pricing::PriceBook& demo_price_book() {
         return read ? std::move(read).value() : pricing::PriceBook{};
     }();
     return book;
+}
+
+// One invented demo job (pricebook-demo/jobs/NAME), read with the survey reader.
+inline model::Installation read_demo_job(const std::string& file_name) {
+    const auto path = std::filesystem::path(MENDWRIGHT_SOURCE_DIR) / "pricebook-demo" / "jobs" / file_name;
+    std::ifstream stream(path);
+    std::stringstream text;
+    text << stream.rdbuf();
+    auto load = io::read_survey(text.str());
+    INFO(path.string());
+    REQUIRE(load.ok());
+    return *load.installation;
+}
+
+// Every invented demo job, by file name in name order.
+struct DemoInstallation {
+    std::string file_name;
+    model::Installation installation;
+};
+inline std::vector<DemoInstallation> demo_installations() {
+    std::vector<std::string> names;
+    for (const auto& entry : std::filesystem::directory_iterator(std::filesystem::path(MENDWRIGHT_SOURCE_DIR) / "pricebook-demo" / "jobs")) {
+        if (entry.path().extension() == ".json") names.push_back(entry.path().filename().string());
+    }
+    std::sort(names.begin(), names.end());
+    std::vector<DemoInstallation> jobs;
+    for (const auto& name : names) jobs.push_back({name, read_demo_job(name)});
+    return jobs;
 }
 
 inline remedies::Assessor shipped_rules() {

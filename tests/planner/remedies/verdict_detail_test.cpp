@@ -8,12 +8,8 @@
 // Verifier whose rules give full findings are compared with those of one asking for verdicts.
 #include <catch2/catch.hpp>
 
-#include <filesystem>
-#include <fstream>
 #include <set>
-#include <sstream>
 
-#include "planner/io/survey_document.hpp"
 #include "planner/remedies/proposals.hpp"
 #include "planner/remedies/verify.hpp"
 #include "planner/rules/assess.hpp"
@@ -73,16 +69,6 @@ std::size_t compare_with_every_option(const model::Installation& installation, c
     return findings;
 }
 
-model::Installation load_job(const std::filesystem::path& path) {
-    std::ifstream stream(path);
-    std::stringstream text;
-    text << stream.rdbuf();
-    auto load = io::read_survey(text.str());
-    INFO(path.string());
-    REQUIRE(load.ok());
-    return *load.installation;
-}
-
 // A random installation with what the generator leaves out, so that every rule has a say:
 // recorded observations (board, circuit and installation-wide), a new-work board without surge
 // protection, and on odd seeds a TN-C-S supply (Table 41.3 Zs maxima) or RA not recorded.
@@ -106,15 +92,10 @@ model::Installation varied_installation(unsigned seed) {
 
 TEST_CASE("rules verdict-only assessment: the same findings, ids and codes as the full one on the demo jobs",
           "[remedies][verify][detail]") {
-    const std::filesystem::path folder = std::filesystem::path(MENDWRIGHT_SOURCE_DIR) / "pricebook-demo" / "jobs";
-    int jobs = 0;
+    const auto jobs = remedy_test::demo_installations();
     std::size_t findings = 0;
-    for (const auto& entry : std::filesystem::directory_iterator(folder)) {
-        if (entry.path().extension() != ".json") continue;
-        findings += compare_with_every_option(load_job(entry.path()), entry.path().filename().string());
-        ++jobs;
-    }
-    CHECK(jobs == 3);
+    for (const auto& job : jobs) findings += compare_with_every_option(job.installation, job.file_name);
+    CHECK(jobs.size() == 3);
     CHECK(findings > 100);
 }
 

@@ -6,12 +6,8 @@
 // feeding several boards, RCDs in series across boards). A wrong shortcut fails here.
 #include <catch2/catch.hpp>
 
-#include <filesystem>
-#include <fstream>
 #include <random>
-#include <sstream>
 
-#include "planner/io/survey_document.hpp"
 #include "planner/remedies/proposals.hpp"
 #include "planner/remedies/verify.hpp"
 #include "tests/planner/remedies/random_installation.hpp"
@@ -47,20 +43,9 @@ int compare_every_option(const model::Installation& installation, const std::str
 
 TEST_CASE("remedies view verification: the same verdict as the whole installation on the demo jobs",
           "[remedies][verify][equivalence]") {
-    const std::filesystem::path folder = std::filesystem::path(MENDWRIGHT_SOURCE_DIR) / "pricebook-demo" / "jobs";
-    int jobs = 0;
-    for (const auto& entry : std::filesystem::directory_iterator(folder)) {
-        if (entry.path().extension() != ".json") continue;
-        std::ifstream stream(entry.path());
-        std::stringstream text;
-        text << stream.rdbuf();
-        const auto load = io::read_survey(text.str());
-        INFO(entry.path().string());
-        REQUIRE(load.ok());
-        CHECK(compare_every_option(*load.installation, entry.path().filename().string()) > 0);
-        ++jobs;
-    }
-    CHECK(jobs == 3);
+    const auto jobs = remedy_test::demo_installations();
+    for (const auto& job : jobs) CHECK(compare_every_option(job.installation, job.file_name) > 0);
+    CHECK(jobs.size() == 3);
 }
 
 TEST_CASE("remedies view verification: the same verdict as the whole installation on seeded random installations",
