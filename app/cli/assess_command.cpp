@@ -2,17 +2,13 @@
 // under a rules profile (the built-in BS 7671:2018+A2 profile unless --profile is given), as a
 // table or as JSON. Exit 0 with findings printed; 3 when the survey or the profile is invalid
 // (every error listed with its path); 1 when a file cannot be read.
-#include <cerrno>
-#include <cstring>
-#include <filesystem>
-#include <fstream>
 #include <optional>
 #include <ostream>
-#include <sstream>
 
 #include <nlohmann/json.hpp>
 
 #include "app/cli/command.hpp"
+#include "app/cli/text_file.hpp"
 #include "planner/io/survey_document.hpp"
 #include "planner/rules/assess.hpp"
 
@@ -20,27 +16,6 @@ namespace mendwright::cli {
 namespace {
 
 constexpr const char* command_name = "mendwright-cli assess";
-
-// The whole file as text, or nothing after saying why on stderr.
-std::optional<std::string> read_text(const std::string& file, CommandContext& context) {
-    std::error_code code;
-    if (std::filesystem::is_directory(file, code)) {
-        context.err << command_name << ": " << file << ": cannot read: is a directory\n";
-        return std::nullopt;
-    }
-    std::ifstream stream(file, std::ios::binary);
-    if (!stream) {
-        context.err << command_name << ": " << file << ": cannot read: " << std::strerror(errno) << "\n";
-        return std::nullopt;
-    }
-    std::ostringstream text;
-    text << stream.rdbuf();
-    if (stream.bad()) {
-        context.err << command_name << ": " << file << ": cannot read: " << std::strerror(errno) << "\n";
-        return std::nullopt;
-    }
-    return text.str();
-}
 
 nlohmann::json finding_json(const rules::Finding& finding) {
     nlohmann::json inputs = nlohmann::json::array();
@@ -108,7 +83,7 @@ int run_assess(const ParsedArgs& args, CommandContext& context) {
 
     std::optional<rules::RulesProfile> custom_profile;
     if (auto profile_file = args.text("profile")) {
-        const auto text = read_text(*profile_file, context);
+        const auto text = read_text_file(*profile_file, context.err, command_name);
         if (!text) return exit_failure;
         auto parsed = rules::parse_rules_profile(*text);
         if (!parsed) {
@@ -120,7 +95,7 @@ int run_assess(const ParsedArgs& args, CommandContext& context) {
     }
     const rules::RulesProfile& profile = custom_profile ? *custom_profile : rules::default_rules_profile();
 
-    const auto text = read_text(file, context);
+    const auto text = read_text_file(file, context.err, command_name);
     if (!text) return exit_failure;
     const io::SurveyLoad load = io::read_survey(*text);
     if (!load.ok()) {

@@ -14,14 +14,12 @@
 #include <cerrno>
 #include <cstdlib>
 #include <cstring>
-#include <filesystem>
-#include <fstream>
 #include <memory>
 #include <nlohmann/json.hpp>
 #include <ostream>
-#include <sstream>
 
 #include "app/cli/command.hpp"
+#include "app/cli/text_file.hpp"
 #include "app/store/job_store.hpp"
 #include "app/store/survey_snapshot.hpp"
 #include "planner/io/survey_document.hpp"
@@ -90,22 +88,6 @@ std::optional<store::JobId> job_id(const std::string& text, CommandContext& cont
     return value;
 }
 
-std::optional<std::string> read_text(const std::string& file, CommandContext& context) {
-    std::error_code code;
-    if (std::filesystem::is_directory(file, code)) {
-        context.err << prefix("add") << file << ": cannot read: is a directory\n";
-        return std::nullopt;
-    }
-    std::ifstream stream(file, std::ios::binary);
-    if (!stream) {
-        context.err << prefix("add") << file << ": cannot read: " << std::strerror(errno) << "\n";
-        return std::nullopt;
-    }
-    std::ostringstream text;
-    text << stream.rdbuf();
-    return text.str();
-}
-
 nlohmann::ordered_json date_json(const std::optional<Date>& date) {
     return date ? nlohmann::ordered_json(date->to_iso()) : nlohmann::ordered_json(nullptr);
 }
@@ -119,7 +101,7 @@ std::string padded(std::string text, std::size_t width) {
 
 int run_add(const ParsedArgs& args, CommandContext& context) {
     const std::string& file = args.positionals.at(0);
-    const auto text = read_text(file, context);
+    const auto text = read_text_file(file, context.err, "mendwright-cli jobs add");
     if (!text) return exit_failure;
     const io::SurveyLoad load = io::read_survey(*text);
     if (!load.ok()) {

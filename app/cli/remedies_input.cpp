@@ -1,36 +1,12 @@
 #include "app/cli/remedies_input.hpp"
 
-#include <cerrno>
-#include <cstring>
-#include <filesystem>
-#include <fstream>
 #include <ostream>
-#include <sstream>
 
+#include "app/cli/text_file.hpp"
 #include "planner/io/survey_document.hpp"
 #include "planner/rules/assess.hpp"
 
 namespace mendwright::cli {
-
-namespace {
-
-std::optional<std::string> read_text_file(const std::string& path, CommandContext& context, const std::string& command) {
-    std::error_code code;
-    if (std::filesystem::is_directory(path, code)) {
-        context.err << "mendwright-cli " << command << ": " << path << ": cannot read: is a directory\n";
-        return std::nullopt;
-    }
-    std::ifstream stream(path, std::ios::binary);
-    if (!stream) {
-        context.err << "mendwright-cli " << command << ": " << path << ": cannot read: " << std::strerror(errno) << "\n";
-        return std::nullopt;
-    }
-    std::ostringstream text;
-    text << stream.rdbuf();
-    return text.str();
-}
-
-}  // namespace
 
 std::string remedies_caution() {
     return std::string(caution_text) +
@@ -40,7 +16,7 @@ std::string remedies_caution() {
 
 std::optional<int> load_remedy_inputs(const ParsedArgs& args, CommandContext& context, const std::string& command,
                                       RemedyInputs& inputs) {
-    auto survey_text = read_text_file(args.positionals.at(0), context, command);
+    auto survey_text = read_text_file(args.positionals.at(0), context.err, "mendwright-cli " + command);
     if (!survey_text) return exit_failure;
     const io::SurveyLoad load = io::read_survey(*survey_text);
     if (!load.ok()) {
@@ -51,7 +27,7 @@ std::optional<int> load_remedy_inputs(const ParsedArgs& args, CommandContext& co
     inputs.installation = *load.installation;
 
     if (auto profile_path = args.text("profile")) {
-        auto profile_text = read_text_file(*profile_path, context, command);
+        auto profile_text = read_text_file(*profile_path, context.err, "mendwright-cli " + command);
         if (!profile_text) return exit_failure;
         auto profile = rules::parse_rules_profile(*profile_text);
         if (!profile) {

@@ -1,14 +1,10 @@
 // `mendwright-cli validate FILE`: reads a survey document (docs/survey-format.md) and lists every
 // problem with its JSON path. Exit 0 when valid (warnings listed), 3 when it has errors, 1 when
 // the file cannot be read.
-#include <cerrno>
-#include <cstring>
-#include <filesystem>
-#include <fstream>
 #include <ostream>
-#include <sstream>
 
 #include "app/cli/command.hpp"
+#include "app/cli/text_file.hpp"
 #include "planner/io/survey_document.hpp"
 
 namespace mendwright::cli {
@@ -20,24 +16,10 @@ std::string count_text(std::size_t count, const char* noun) {
 
 int run_validate(const ParsedArgs& args, CommandContext& context) {
     const std::string& file = args.positionals.at(0);
-    std::error_code code;
-    if (std::filesystem::is_directory(file, code)) {
-        context.err << "mendwright-cli validate: " << file << ": cannot read: is a directory\n";
-        return exit_failure;
-    }
-    std::ifstream stream(file, std::ios::binary);
-    if (!stream) {
-        context.err << "mendwright-cli validate: " << file << ": cannot read: " << std::strerror(errno) << "\n";
-        return exit_failure;
-    }
-    std::ostringstream text;
-    text << stream.rdbuf();
-    if (stream.bad()) {
-        context.err << "mendwright-cli validate: " << file << ": cannot read: " << std::strerror(errno) << "\n";
-        return exit_failure;
-    }
+    const auto text = read_text_file(file, context.err, "mendwright-cli validate");
+    if (!text) return exit_failure;
 
-    const io::SurveyLoad load = io::read_survey(text.str());
+    const io::SurveyLoad load = io::read_survey(*text);
     const auto errors = load.errors();
     const auto warnings = load.warnings();
     if (load.ok())
