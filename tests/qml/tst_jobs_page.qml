@@ -2,8 +2,8 @@ import QtQuick
 import QtTest
 import Mendwright
 
-// The jobs page on the test store (two invented jobs): overdue first, written out in words,
-// and Enter opens the highlighted job.
+// The jobs page on the test store (two invented jobs, and any a test file before it added):
+// the overdue job first, written out in words, and Enter opens the highlighted job.
 Item {
     id: scene
     width: 1100; height: 600
@@ -28,7 +28,9 @@ Item {
         function test_overdue_job_is_first_and_enter_opens_it() {
             const list = findList(page)
             verify(list)
-            tryCompare(list, "count", 2)
+            // The test store holds the two invented jobs of the fixture; other test files may add
+            // jobs of their own (not overdue), so the list is checked for these, not counted.
+            tryVerify(() => list.count >= 2)
             const first = list.itemAtIndex(0)
             compare(first.reference, "DT-101")
             verify(first.overdue)
