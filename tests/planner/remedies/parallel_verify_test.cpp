@@ -34,11 +34,7 @@ int compare_shared_with_serial(const model::Installation& installation, const st
         const auto one = serial.verify(option);
         const auto& v = option.verification;
         CHECK(v.done);
-        CHECK(v.cleared == one.cleared);
-        CHECK(v.still_open == one.still_open);
-        CHECK(v.introduced == one.introduced);
-        CHECK(v.introduced_urgent == one.introduced_urgent);
-        CHECK(v.clears_every_urgent_target == one.clears_every_urgent_target);
+        remedy_test::check_same_verdict(v, one);
         // And the read-only path gives the same again on a verifier that was never prepared.
         remedies::Verifier fresh(installation, remedy_test::shipped_rules());
         CHECK(fresh.verify_prepared(option).cleared == one.cleared);

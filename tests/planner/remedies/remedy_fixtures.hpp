@@ -15,6 +15,7 @@
 #include "planner/model/installation.hpp"
 #include "planner/pricing/price_book.hpp"
 #include "planner/remedies/analysis.hpp"
+#include "planner/remedies/verify.hpp"
 #include "planner/rules/assess.hpp"
 
 namespace mendwright::remedy_test {
@@ -146,6 +147,15 @@ inline std::vector<DemoInstallation> demo_installations() {
     std::vector<DemoInstallation> jobs;
     for (const auto& name : names) jobs.push_back({name, read_demo_job(name)});
     return jobs;
+}
+
+// Two verifications of one option agree on every verdict field.
+inline void check_same_verdict(const remedies::Verification& a, const remedies::Verification& b) {
+    CHECK(a.cleared == b.cleared);
+    CHECK(a.still_open == b.still_open);
+    CHECK(a.introduced == b.introduced);
+    CHECK(a.introduced_urgent == b.introduced_urgent);
+    CHECK(a.clears_every_urgent_target == b.clears_every_urgent_target);
 }
 
 inline remedies::Assessor shipped_rules() {

@@ -29,11 +29,7 @@ int compare_every_option(const model::Installation& installation, const std::str
         INFO(name << ": " << option.id);
         const auto shortcut = verifier.verify(option);
         const auto whole = verifier.verify_whole(option);
-        CHECK(shortcut.cleared == whole.cleared);
-        CHECK(shortcut.still_open == whole.still_open);
-        CHECK(shortcut.introduced == whole.introduced);
-        CHECK(shortcut.introduced_urgent == whole.introduced_urgent);
-        CHECK(shortcut.clears_every_urgent_target == whole.clears_every_urgent_target);
+        remedy_test::check_same_verdict(shortcut, whole);
         ++compared;
     }
     return compared;
