@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <map>
 
+#include "planner/export/heap_kept_for_reuse.hpp"
 #include "planner/export/replace_file.hpp"
 #include "planner/export/xlsx_sheet.hpp"
 
@@ -90,22 +91,25 @@ void Writer::quote_sheet_contents() {
     sheet.column(col_hours, col_hours, 10);
     sheet.column(col_labour, col_line_total, 13);
 
+    // Rows go top to bottom on every sheet: the workbook is written in libxlsxwriter's
+    // constant-memory mode, which streams each row out when the next one starts and refuses a
+    // cell above it (the refusal reaches the caller as an error, never as a missing cell).
     sheet.text(0, 0, "Quotation " + quote.number, f.title);
     sheet.text(1, 0, "Client", f.label);
     sheet.text(1, 1, quote.client_name);
-    sheet.text(2, 0, "Site", f.label);
-    sheet.text(2, 1, quote.site_address);
-    sheet.text(3, 0, "Plan", f.label);
-    sheet.text(3, 1, quote.chosen_plan.name);
-    sheet.text(4, 0, "Alternative", f.label);
-    sheet.text(4, 1, quote.alternative_plan ? quote.alternative_plan->name + " (see \"Plans compared\")" : "none offered");
-
     sheet.text(1, col_unit_cost, "Date", f.label);
     sheet.date(1, col_labour, quote.date.year, quote.date.month, quote.date.day, f.date);
+    sheet.text(2, 0, "Site", f.label);
+    sheet.text(2, 1, quote.site_address);
     sheet.text(2, col_unit_cost, "Valid until", f.label);
     sheet.date(2, col_labour, quote.valid_until.year, quote.valid_until.month, quote.valid_until.day, f.date);
+    sheet.text(row_rate, 0, "Plan", f.label);
+    sheet.text(row_rate, 1, quote.chosen_plan.name);
     sheet.text(row_rate, col_unit_cost, "Labour rate per hour", f.label);
     sheet.number(row_rate, col_labour, pounds(settings.labour_rate_per_hour_pence), f.money);
+    sheet.text(row_markup, 0, "Alternative", f.label);
+    sheet.text(row_markup, 1,
+               quote.alternative_plan ? quote.alternative_plan->name + " (see \"Plans compared\")" : "none offered");
     sheet.text(row_markup, col_unit_cost, "Markup on materials", f.label);
     sheet.number(row_markup, col_labour, percent_fraction(settings.markup_on_materials_bp), f.percent);
     if (settings.contingency.is_percentage) {
@@ -411,8 +415,13 @@ void Writer::materials_sheet_contents() {
 Result<WrittenWorkbook> write_quote_workbook(const pricing::Quote& quote, const std::filesystem::path& target,
                                              FigureList figure_list) {
     std::vector<WrittenFigure> figures;
+    const HeapKeptForReuse heap_kept;
     auto written = replace_file(target, [&](const std::filesystem::path& temporary) -> std::optional<Problem> {
-        lxw_workbook* book = workbook_new(temporary.c_str());
+        // Constant-memory mode: each row is written out as soon as the next one starts, so the
+        // cells are not all held until the workbook is closed (see the row order note above).
+        lxw_workbook_options options{};
+        options.constant_memory = LXW_TRUE;
+        lxw_workbook* book = workbook_new_opt(temporary.c_str(), &options);
         if (book == nullptr) return problem("", "the spreadsheet library could not start a workbook");
         Writer writer(quote, book);
         writer.keep_figures = figure_list == FigureList::kept;
