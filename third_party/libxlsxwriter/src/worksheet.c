@@ -766,7 +766,12 @@ lxw_worksheet_free(lxw_worksheet *worksheet)
     _free_filter_rules(worksheet);
 
     if (worksheet->array) {
-        for (col = 0; col < LXW_COL_MAX; col++) {
+        /* Local change in Mendwright's copy (see README.mendwright.md): only the columns inside
+         * the sheet's dimensions can hold a cell (every write checks and widens them first, and
+         * lxw_worksheet_write_single_row() relies on the same), so only those are visited.
+         * Upstream 1.1.4 reads all LXW_COL_MAX slots, faulting in 128 kB per sheet. */
+        for (col = worksheet->dim_colmin;
+             col <= worksheet->dim_colmax && col < LXW_COL_MAX; col++) {
             _free_cell(worksheet->array[col]);
         }
         free(worksheet->array);
