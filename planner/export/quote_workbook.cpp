@@ -3,6 +3,7 @@
 #include <xlsxwriter.h>
 
 #include <algorithm>
+#include <iterator>
 #include <map>
 
 #include "planner/export/heap_kept_for_reuse.hpp"
@@ -67,10 +68,10 @@ struct Writer {
         return "&LPlanning aid: work to be done and certified by a competent person&RPage &P of &N";
     }
 
-    void quote_sheet_contents();
-    void plans_sheet_contents();
-    void findings_sheet_contents();
-    void materials_sheet_contents();
+    void quote_sheet_contents(lxw_worksheet* raw_sheet);
+    void plans_sheet_contents(lxw_worksheet* raw_sheet);
+    void findings_sheet_contents(lxw_worksheet* raw_sheet);
+    void materials_sheet_contents(lxw_worksheet* raw_sheet);
 };
 
 // Quote sheet columns.
@@ -78,8 +79,8 @@ constexpr lxw_col_t col_code = 0, col_description = 1, col_quantity = 2, col_uni
                     col_materials = 5, col_hours = 6, col_labour = 7, col_line_total = 8;
 constexpr lxw_row_t row_rate = 3, row_markup = 4, row_contingency = 5, row_vat = 6, row_table_header = 8;
 
-void Writer::quote_sheet_contents() {
-    Sheet sheet(workbook_add_worksheet(book, quote_sheet), first_error);
+void Writer::quote_sheet_contents(lxw_worksheet* raw_sheet) {
+    Sheet sheet(raw_sheet, first_error);
     const auto& settings = quote.works.settings;
     const auto& totals = quote.totals;
     const Formats& f = formats;
@@ -262,8 +263,8 @@ void Writer::quote_sheet_contents() {
     worksheet_print_area(sheet.raw(), 0, 0, row, col_line_total);
 }
 
-void Writer::plans_sheet_contents() {
-    Sheet sheet(workbook_add_worksheet(book, plans_sheet), first_error);
+void Writer::plans_sheet_contents(lxw_worksheet* raw_sheet) {
+    Sheet sheet(raw_sheet, first_error);
     const Formats& f = formats;
     const bool has_alternative = quote.alternative_plan.has_value();
     sheet.column(0, 0, 34);
@@ -293,7 +294,7 @@ void Writer::plans_sheet_contents() {
     const std::size_t most_options =
         std::max(chosen.option_titles.size(), other ? other->option_titles.size() : std::size_t{0});
     text_row("Options", [](const pricing::PlanSummary& p) { return joined(p.option_titles, "\n"); });
-    worksheet_set_row(sheet.raw(), row - 1, 13.5 * static_cast<double>(std::max<std::size_t>(most_options, 1)), nullptr);
+    sheet.row_height(row - 1, 13.5 * static_cast<double>(std::max<std::size_t>(most_options, 1)));
 
     sheet.text(row, 0, "Price including VAT", f.label);
     sheet.formula(row, 1, "='" + std::string(quote_sheet) + "'!" + cell_name(total_row, col_line_total),
@@ -321,8 +322,8 @@ void Writer::plans_sheet_contents() {
     sheet.print_setup(false, page_header("plans compared"), page_footer(), 2, 2);
 }
 
-void Writer::findings_sheet_contents() {
-    Sheet sheet(workbook_add_worksheet(book, findings_sheet), first_error);
+void Writer::findings_sheet_contents(lxw_worksheet* raw_sheet) {
+    Sheet sheet(raw_sheet, first_error);
     const Formats& f = formats;
     const double widths[] = {24, 6, 44, 34, 22, 40};
     for (lxw_col_t c = 0; c < 6; ++c) sheet.column(c, c, widths[c]);
@@ -330,6 +331,10 @@ void Writer::findings_sheet_contents() {
     const char* headings[] = {"Ref", "Code", "Finding", "Location", "Clause", "Cleared by (this quote)"};
     for (lxw_col_t c = 0; c < 6; ++c) sheet.text(2, c, headings[c], f.header);
     worksheet_freeze_panes(sheet.raw(), 3, 0);
+    // The filter spans the header and one row per finding. It is set before those rows are
+    // written: in constant-memory mode a range ending above the current row is refused.
+    const auto last_finding_row = static_cast<lxw_row_t>(2 + quote.findings.size());
+    sheet.autofilter(2, 0, last_finding_row, 5);
     lxw_row_t row = 3;
     for (const auto& quoted : quote.findings) {
         sheet.text(row, 0, quoted.finding.id, f.wrap);
@@ -341,12 +346,11 @@ void Writer::findings_sheet_contents() {
         ++row;
     }
     if (quote.findings.empty()) sheet.text(row, 0, "No findings listed.");
-    worksheet_autofilter(sheet.raw(), 2, 0, quote.findings.empty() ? 2 : row - 1, 5);
     sheet.print_setup(true, page_header("findings"), page_footer(), 2, 2);
 }
 
-void Writer::materials_sheet_contents() {
-    Sheet sheet(workbook_add_worksheet(book, materials_sheet), first_error);
+void Writer::materials_sheet_contents(lxw_worksheet* raw_sheet) {
+    Sheet sheet(raw_sheet, first_error);
     const Formats& f = formats;
     const double widths[] = {17, 50, 8, 10, 12, 13, 14};
     for (lxw_col_t c = 0; c < 7; ++c) sheet.column(c, c, widths[c]);
@@ -423,13 +427,28 @@ Result<WrittenWorkbook> write_quote_workbook(const pricing::Quote& quote, const 
         options.constant_memory = LXW_TRUE;
         lxw_workbook* book = workbook_new_opt(temporary.c_str(), &options);
         if (book == nullptr) return problem("", "the spreadsheet library could not start a workbook");
+        // In constant-memory mode each sheet opens its own temporary file as it is added, so a
+        // sheet can fail to start (temporary folder not writable or full, no file handles left).
+        const char* const sheet_names[] = {quote_sheet, plans_sheet, findings_sheet, materials_sheet};
+        lxw_worksheet* sheets[std::size(sheet_names)] = {};
+        for (std::size_t i = 0; i < std::size(sheet_names); ++i) {
+            sheets[i] = workbook_add_worksheet(book, sheet_names[i]);
+            if (sheets[i] == nullptr) {
+                // Freed without packaging: workbook_close() on a workbook with no sheet would add a
+                // default one, fail again, and read the empty sheet list.
+                lxw_workbook_free(book);
+                return problem("", std::string("the spreadsheet library could not start the sheet \"") + sheet_names[i] +
+                                       "\": its temporary file could not be made (check that the temporary folder, "
+                                       "TMPDIR, is writable and has space)");
+            }
+        }
         Writer writer(quote, book);
         writer.keep_figures = figure_list == FigureList::kept;
-        writer.quote_sheet_contents();
-        writer.plans_sheet_contents();
-        writer.findings_sheet_contents();
-        writer.materials_sheet_contents();
-        worksheet_activate(workbook_get_worksheet_by_name(book, quote_sheet));
+        writer.quote_sheet_contents(sheets[0]);
+        writer.plans_sheet_contents(sheets[1]);
+        writer.findings_sheet_contents(sheets[2]);
+        writer.materials_sheet_contents(sheets[3]);
+        worksheet_activate(sheets[0]);
         const lxw_error closed = workbook_close(book);  // frees the workbook whatever happens
         if (writer.first_error != LXW_NO_ERROR) {
             return problem("", std::string("a cell could not be written: ") + lxw_strerror(writer.first_error));

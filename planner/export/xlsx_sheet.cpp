@@ -1,6 +1,14 @@
 #include "planner/export/xlsx_sheet.hpp"
 
+#include <algorithm>
+
 namespace mendwright::spreadsheet {
+
+namespace {
+// The most characters a cell holds: libxlsxwriter's LXW_STR_MAX (src/worksheet.c), the limit its
+// worksheet_write_string() documentation gives.
+constexpr std::ptrdiff_t cell_text_max_characters = 32767;
+}  // namespace
 
 std::string cell_name(lxw_row_t row, lxw_col_t col, bool fixed) {
     std::string letters;
@@ -91,9 +99,21 @@ void Sheet::date(lxw_row_t row, lxw_col_t col, int year, unsigned month, unsigne
 }
 
 void Sheet::merged_text(lxw_row_t row, lxw_col_t first_col, lxw_col_t last_col, const std::string& value,
-                        lxw_format* format, double row_height) {
+                        lxw_format* format, double height_points) {
+    // libxlsxwriter drops the result of writing a merged range's text, so the length limit it
+    // would refuse is checked here (characters counted as UTF-8 lead bytes).
+    const auto characters = std::count_if(value.begin(), value.end(), [](char c) { return (c & 0xC0) != 0x80; });
+    if (characters > cell_text_max_characters) keep(LXW_ERROR_MAX_STRING_LENGTH_EXCEEDED);
     keep(worksheet_merge_range(sheet_, row, first_col, row, last_col, value.c_str(), format));
-    keep(worksheet_set_row(sheet_, row, row_height, nullptr));
+    row_height(row, height_points);
+}
+
+void Sheet::row_height(lxw_row_t row, double height_points) {
+    keep(worksheet_set_row(sheet_, row, height_points, nullptr));
+}
+
+void Sheet::autofilter(lxw_row_t first_row, lxw_col_t first_col, lxw_row_t last_row, lxw_col_t last_col) {
+    keep(worksheet_autofilter(sheet_, first_row, first_col, last_row, last_col));
 }
 
 void Sheet::column(lxw_col_t first, lxw_col_t last, double width, lxw_format* format) {

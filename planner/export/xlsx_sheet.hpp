@@ -39,8 +39,13 @@ public:
     void number(lxw_row_t row, lxw_col_t col, double value, lxw_format* format = nullptr);
     void formula(lxw_row_t row, lxw_col_t col, const std::string& formula, double cached, lxw_format* format = nullptr);
     void date(lxw_row_t row, lxw_col_t col, int year, unsigned month, unsigned day, lxw_format* format);
+    // One row only: in constant-memory mode libxlsxwriter can merge cells only within the row
+    // being written (its documentation says merges "generally don't work" in that mode; a
+    // single-row merge puts the text, the formatted blanks and the height all on that row).
     void merged_text(lxw_row_t row, lxw_col_t first_col, lxw_col_t last_col, const std::string& value,
-                     lxw_format* format, double row_height);
+                     lxw_format* format, double height_points);
+    void row_height(lxw_row_t row, double height_points);
+    void autofilter(lxw_row_t first_row, lxw_col_t first_col, lxw_row_t last_row, lxw_col_t last_col);
     void column(lxw_col_t first, lxw_col_t last, double width, lxw_format* format = nullptr);
     // A4, fitted to one page wide, header and footer, the header rows repeated on each page.
     void print_setup(bool landscape, const std::string& header, const std::string& footer, lxw_row_t repeat_first,

@@ -5,8 +5,9 @@ Run by CTest (see CMakeLists.txt) with Debian's /usr/bin/python3, which has pyth
 
   check_quote_workbook.py --tool EXPORT_SAMPLE_QUOTE --work DIR [--recalculate]
 
-1. The tool writes an invented sample quote, a 300-line quote with awkward quantities, and for
-   each a JSON file of the figures the pricing module worked out (name, sheet, cell, pence).
+1. The tool writes an invented sample quote, a 300-line quote with awkward quantities, a
+   12-line quote with no findings, and for each a JSON file of the figures the pricing module
+   worked out (name, sheet, cell, pence).
 2. openpyxl reads them: sheet names, labels, formulas, cached values, formats, print setup.
    Every line and total is also re-worked here from the workbook's own inputs with Python's
    decimal module (half up, as planner/pricing/money.hpp states), independently of the engine.
@@ -57,7 +58,8 @@ def write_samples(tool, work):
     os.makedirs(work)
     subprocess.run([tool, "--out", work], check=True)
     subprocess.run([tool, "--out", work, "--name", "bulk-300", "--lines", "300"], check=True)
-    return [os.path.join(work, n) for n in ("sample-quote", "bulk-300")]
+    subprocess.run([tool, "--out", work, "--name", "no-findings", "--lines", "12", "--no-findings"], check=True)
+    return [os.path.join(work, n) for n in ("sample-quote", "bulk-300", "no-findings")]
 
 
 def check_structure(base, expected):
@@ -103,6 +105,36 @@ def check_structure(base, expected):
         check("C2 No device gives fault protection: RA 310 ohm, no RCD (at 2 places: see Findings)" in first,
               f"{name}: the first option's line does not group the two C2 findings: {first!r}")
     check(not any("@" in t for t in puts_right), f"{name}: a 'Puts right' line shows finding ids: {puts_right!r}")
+    # The block above the table, label and figure side by side on each row.
+    for cell, label in (("A2", "Client"), ("E2", "Date"), ("A3", "Site"), ("E3", "Valid until"),
+                        ("A4", "Plan"), ("E4", "Labour rate per hour"), ("A5", "Alternative"),
+                        ("E5", "Markup on materials"), ("E7", "VAT")):
+        check(quote[cell].value == label, f"{name}: Quote!{cell} is {quote[cell].value!r}, expected {label!r}")
+    check(quote["H2"].is_date and quote["H3"].is_date, f"{name}: the quote and validity dates are not dates")
+    # Option headings, "Puts right" lines and notes are merged across the table, one row each, and
+    # tall enough for their wrapped text (13.5 points a line, the writer's own rule).
+    merged = {str(r) for r in quote.merged_cells.ranges}
+    check(all(re.fullmatch(r"A(\d+):I\1", r) for r in merged), f"{name}: a merged range is not one table row: {merged}")
+    notes = texts_of_notes(quote)
+    check(len(notes) >= 4, f"{name}: only {len(notes)} exclusions and cautions found under their headings")
+    for row in quote.iter_rows(min_col=1, max_col=1):
+        cell = row[0]
+        if isinstance(cell.value, str) and (cell.value.startswith("Puts right: ") or cell.value in notes):
+            check(f"A{cell.row}:I{cell.row}" in merged, f"{name}: Quote!A{cell.row} is not merged across the table")
+            height = quote.row_dimensions[cell.row].height
+            check(height is not None and height >= 13.5, f"{name}: Quote row {cell.row} height {height}")
+    options_height = formulas["Plans compared"].row_dimensions[5].height
+    check(options_height is not None and options_height >= 13.5, f"{name}: Plans compared options row height {options_height}")
+    # The findings filter spans the header and exactly the findings' rows (none: the header only).
+    findings = formulas["Findings"]
+    rows = [r[0].value for r in findings.iter_rows(min_row=4, min_col=1, max_col=1) if r[0].value is not None]
+    listed = [v for v in rows if v != "No findings listed."]
+    check(findings.auto_filter.ref == f"A3:F{3 + len(listed)}",
+          f"{name}: Findings filter {findings.auto_filter.ref!r} for {len(listed)} findings")
+    if name == "no-findings":
+        check(rows == ["No findings listed."], f"{name}: Findings rows {rows!r}")
+    else:
+        check(len(listed) == 6 and "No findings listed." not in rows, f"{name}: Findings rows {rows!r}")
     for sheet in SHEETS[1:]:
         check(formulas[sheet].freeze_panes is not None, f"{name}: {sheet} has no frozen header")
         check(int(formulas[sheet].page_setup.paperSize) == 9, f"{name}: {sheet} is not set to A4")
@@ -115,6 +147,20 @@ def check_structure(base, expected):
     check(formulas["Plans compared"][by_name["plans.chosen.total"]["cell"]].value
           == "='Quote'!" + by_name["total"]["cell"], f"{name}: chosen-plan price does not refer to the quote total")
     return cached
+
+
+def texts_of_notes(quote):
+    """The paragraphs under "Not included" and "Please note": the rows after those headings."""
+    notes, inside = set(), False
+    for row in quote.iter_rows(min_col=1, max_col=1):
+        value = row[0].value
+        if value in ("Not included", "Please note"):
+            inside = True
+        elif value is None:
+            inside = False
+        elif inside:
+            notes.add(value)
+    return notes
 
 
 def rework_independently(base, expected, book):

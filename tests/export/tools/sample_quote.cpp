@@ -4,7 +4,7 @@ namespace mendwright::test {
 
 using namespace pricing;
 
-Result<Quote> sample_quote(const std::string& price_book_folder, std::size_t line_count) {
+Result<Quote> sample_quote(const std::string& price_book_folder, std::size_t line_count, Findings findings) {
     auto book = read_price_book(price_book_folder);
     if (!book) return book.problem();
 
@@ -25,6 +25,8 @@ Result<Quote> sample_quote(const std::string& price_book_folder, std::size_t lin
         {"spd.absent@board:main", "C3", "No surge protection", "Consumer unit, hall", "BS 7671 443.4"},
         {"recorded:garage-socket", "FI", "Garage socket-outlet shows signs of heat", "Garage", "BS 7671 421.1"},
     };
+
+    if (findings == Findings::none) request.findings.clear();
 
     std::vector<OptionBill> options;
     if (line_count == 0) {

@@ -3,7 +3,8 @@
 // three options, one extra line, a findings schedule and two plans. Nothing here is a real
 // job, client or address. With `line_count` > 0 the works list is instead `line_count` lines
 // cycling through the price book, 100 to an option, with awkward quantities (three decimals)
-// to exercise every rounding rule.
+// to exercise every rounding rule. `findings` = Findings::none leaves the findings schedule empty
+// (for the bulk works list, whose options clear none).
 #include <cstddef>
 #include <string>
 
@@ -11,6 +12,9 @@
 
 namespace mendwright::test {
 
-Result<pricing::Quote> sample_quote(const std::string& price_book_folder, std::size_t line_count);
+enum class Findings { listed, none };
+
+Result<pricing::Quote> sample_quote(const std::string& price_book_folder, std::size_t line_count,
+                                    Findings findings = Findings::listed);
 
 }  // namespace mendwright::test

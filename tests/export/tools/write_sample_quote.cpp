@@ -2,9 +2,10 @@
 // the pricing module worked out and the cell it was written to; the read-back script compares
 // the workbook (as written, and as recalculated by LibreOffice) with those figures.
 //
-//   export_sample_quote --out DIR [--name NAME] [--lines N] [--no-figures]
+//   export_sample_quote --out DIR [--name NAME] [--lines N] [--no-findings] [--no-figures]
 // writes DIR/NAME.xlsx and DIR/NAME.expected.json (NAME defaults to sample-quote). The JSON
 // also holds the figures after one quantity edit ("edit"), for the recalculation check.
+// --no-findings leaves the findings schedule empty (use it with --lines, whose options clear none).
 #include <cstdlib>
 #include <filesystem>
 #include <fstream>
@@ -35,6 +36,7 @@ int main(int argc, char** argv) {
     std::string name = "sample-quote";
     std::size_t lines = 0;
     bool write_figures = true;
+    auto findings = mendwright::test::Findings::listed;
     for (int i = 1; i < argc; ++i) {
         const std::string arg = argv[i];
         if (arg == "--out" && i + 1 < argc) {
@@ -43,15 +45,17 @@ int main(int argc, char** argv) {
             name = argv[++i];
         } else if (arg == "--lines" && i + 1 < argc) {
             lines = std::strtoul(argv[++i], nullptr, 10);
+        } else if (arg == "--no-findings") {
+            findings = mendwright::test::Findings::none;
         } else if (arg == "--no-figures") {
             write_figures = false;
         } else {
-            return fail("usage: export_sample_quote --out DIR [--name NAME] [--lines N] [--no-figures]");
+            return fail("usage: export_sample_quote --out DIR [--name NAME] [--lines N] [--no-findings] [--no-figures]");
         }
     }
     if (out.empty()) return fail("--out DIR is required");
 
-    auto quote = mendwright::test::sample_quote(std::string(MENDWRIGHT_SOURCE_DIR) + "/pricebook-demo", lines);
+    auto quote = mendwright::test::sample_quote(std::string(MENDWRIGHT_SOURCE_DIR) + "/pricebook-demo", lines, findings);
     if (!quote) return fail(quote.problem().to_string());
     const auto target = out / (name + ".xlsx");
     // With --no-figures the tool writes the workbook as the product does (no figure list).

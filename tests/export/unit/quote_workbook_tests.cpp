@@ -4,6 +4,8 @@
 
 #include <filesystem>
 #include <fstream>
+#include <fcntl.h>
+#include <sys/resource.h>
 #include <unistd.h>
 
 #include "planner/export/quote_workbook.hpp"
@@ -120,6 +122,43 @@ TEST_CASE("export: a failed write keeps the earlier file whole and removes the t
     std::string text;
     std::getline(in, text);
     CHECK(text == "earlier quote");
+}
+
+TEST_CASE("export: a sheet whose temporary file cannot be made is an error, not a crash, and leaves no file",
+          "[export]") {
+    TemporaryFolder folder;
+    const pricing::Quote quote = demo_quote();
+    // Every file descriptor below the lowest free one is in use, so a limit at that number makes
+    // the next open fail (EMFILE, getrlimit(2)): the first sheet's temporary file cannot be made.
+    const int lowest_free = ::open("/dev/null", O_RDONLY);
+    REQUIRE(lowest_free >= 0);
+    ::close(lowest_free);
+    rlimit saved{};
+    REQUIRE(::getrlimit(RLIMIT_NOFILE, &saved) == 0);
+    rlimit tight = saved;
+    tight.rlim_cur = static_cast<rlim_t>(lowest_free);
+    REQUIRE(::setrlimit(RLIMIT_NOFILE, &tight) == 0);
+    const auto written = spreadsheet::write_quote_workbook(quote, folder.path / "quote.xlsx");
+    REQUIRE(::setrlimit(RLIMIT_NOFILE, &saved) == 0);
+    REQUIRE_FALSE(written.ok());
+    CHECK_THAT(written.problem().message, Catch::Contains("temporary file could not be made"));
+    CHECK_THAT(written.problem().message, Catch::Contains("\"Quote\""));
+    CHECK(folder.entries() == 0);
+}
+
+TEST_CASE("export: a merged note longer than a cell holds is an error, not an empty cell", "[export]") {
+    TemporaryFolder folder;
+    pricing::Quote quote = demo_quote();
+    // 32,767 characters is a cell's limit (libxlsxwriter's LXW_STR_MAX); the notes are merged rows.
+    quote.exclusions.push_back(std::string(32'768, 'x'));
+    const auto written = spreadsheet::write_quote_workbook(quote, folder.path / "quote.xlsx");
+    REQUIRE_FALSE(written.ok());
+    CHECK_THAT(written.problem().message, Catch::Contains("cannot be written"));
+    CHECK(folder.entries() == 0);
+    // Exactly at the limit, counted in characters (here two bytes each), it is written.
+    quote.exclusions.back() = std::string();
+    for (int i = 0; i < 32'767; ++i) quote.exclusions.back() += "\u00e9";
+    CHECK(spreadsheet::write_quote_workbook(quote, folder.path / "quote.xlsx").ok());
 }
 
 TEST_CASE("export: cell names and page-header text", "[export]") {
