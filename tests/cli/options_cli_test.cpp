@@ -5,6 +5,7 @@
 #include <filesystem>
 #include <fstream>
 #include <nlohmann/json.hpp>
+#include <unistd.h>
 
 #include "planner/io/survey_document.hpp"
 #include "tests/cli/calc_cli_run.hpp"
@@ -16,7 +17,10 @@ namespace {
 
 std::string cottage_file() {
     static const std::string path = [] {
-        const auto file = std::filesystem::temp_directory_path() / "mendwright-remedies-cli-cottage.json";
+        // One file per test process: CTest runs test cases in parallel processes (and another
+        // checkout's tests may run on the same machine), each rewriting its copy.
+        const auto file = std::filesystem::temp_directory_path() /
+                          ("mendwright-remedies-cli-cottage-" + std::to_string(::getpid()) + ".json");
         std::ofstream(file) << io::write_survey(remedy_test::tt_cottage_without_rcd());
         return file.string();
     }();
@@ -49,7 +53,8 @@ TEST_CASE("options CLI: JSON lists verified, costed options with the caution", "
 
 TEST_CASE("options CLI: a price-book code missing for an option is an error naming the option and the code",
           "[cli][remedies]") {
-    const auto folder = std::filesystem::temp_directory_path() / "mendwright-remedies-cli-book";
+    const auto folder =
+        std::filesystem::temp_directory_path() / ("mendwright-remedies-cli-book-" + std::to_string(::getpid()));
     std::filesystem::create_directories(folder);
     std::filesystem::copy_file(demo_book + "/settings.json", folder / "settings.json",
                                std::filesystem::copy_options::overwrite_existing);

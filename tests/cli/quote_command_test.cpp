@@ -6,6 +6,7 @@
 #include <filesystem>
 #include <fstream>
 #include <nlohmann/json.hpp>
+#include <unistd.h>
 
 #include "tests/cli/calc_cli_run.hpp"
 
@@ -15,7 +16,8 @@ const std::string demo_dir = std::string(MENDWRIGHT_SOURCE_DIR) + "/pricebook-de
 const std::string terrace = demo_dir + "/jobs/rented-terrace-tt-no-rcd.json";
 
 std::filesystem::path fresh_dir(const std::string& name) {
-    auto dir = std::filesystem::temp_directory_path() / ("mendwright-quote-cli-" + name);
+    // Per process: another checkout's tests may run on the same machine at the same time.
+    auto dir = std::filesystem::temp_directory_path() / ("mendwright-quote-cli-" + name + "-" + std::to_string(::getpid()));
     std::filesystem::remove_all(dir);
     std::filesystem::create_directories(dir);
     return dir;
